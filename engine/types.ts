@@ -165,3 +165,6 @@ export interface FramePlan {
   bounds: { minX: number; minY: number; maxX: number; maxY: number };
   areaM2: number;
 }
+
+/** The frame plan before take-off: what the layout produces and takeOff() consumes. */
+export type FramePlanCore = Omit<FramePlan, 'quantities' | 'cutList'>;

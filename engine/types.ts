@@ -141,6 +141,10 @@ export interface CutListResult {
   lowerBound: number;
   /** True when the count was proven optimal. */
   optimal: boolean;
+  /** Total length of new stock bought, mm (several stock lengths: the objective minimised first). */
+  totalStockMm?: number;
+  /** Pieces longer than every stock length and offcut: not cut, for the caller to split or flag. */
+  tooLong?: number[];
 }
 
 export interface CutList {

@@ -1,0 +1,223 @@
+// Cut list: which stock bars to buy and how to cut each (1-D cutting stock with kerf, several stock lengths, reusable offcuts). Pure; touches nothing outside engine/.
+import { z } from 'zod';
+import type { CutListResult, CutStock } from '../types';
+import { countLowerBound, isSingleStock, l2Bound, remainingBound } from './bounds';
+import { binCompletion } from './exact';
+import { fitDecreasing, greedyFill } from './heuristics';
+import { better, scoreOf, type Bin, type BinType, type Problem, type Score } from './model';
+
+const length = (label: string) =>
+  z
+    .number({ error: `${label} must be a number of millimetres` })
+    .finite(`${label} must be a finite number`)
+    .positive(`${label} must be more than 0 mm`)
+    .max(1_000_000, `${label} must be at most 1 km`);
+
+/** The cut list input, as the command line and callers give it. */
+export const cutListInputSchema = z.object({
+  stockMm: z.union([
+    length('stockMm'),
+    z.array(length('Each stock length')).min(1, 'stockMm needs at least one stock length'),
+  ]),
+  kerfMm: z
+    .number({ error: 'kerfMm must be a number of millimetres' })
+    .finite('kerfMm must be a finite number')
+    .min(0, 'kerfMm cannot be negative')
+    .max(50, 'kerfMm above 50 mm is not a saw'),
+  pieces: z
+    .array(
+      z.object({
+        lengthMm: length('Piece lengthMm'),
+        qty: z
+          .number({ error: 'Piece qty must be a whole number' })
+          .int('Piece qty must be a whole number')
+          .min(0, 'Piece qty cannot be negative')
+          .max(100_000, 'Piece qty above 100000 is not a deck'),
+      }),
+    )
+    .max(10_000, 'At most 10000 piece lines'),
+  minOffcutMm: z.number().finite().min(0).optional(),
+  offcuts: z.array(length('Each offcut')).max(10_000).optional(),
+});
+
+/** Cut list input (see cutListInputSchema). */
+export type CutListInput = z.input<typeof cutListInputSchema>;
+
+/** Tuning for solveCutList; the defaults suit the live editor. */
+export interface CutListOptions {
+  /** Node budget for the exact search (deterministic; no clock in the engine). */
+  budget?: number;
+}
+
+const DEFAULT_BUDGET = 20_000;
+const CACHE_SIZE = 64;
+const cache = new Map<string, CutListResult>();
+
+/**
+ * Optimised cut list: minimises the total length of new stock bought, then the number of new bars
+ * (with one stock length: the number of bars). Kerf model in ./model.ts: the last piece of a bar may
+ * run to its end without a saw cut. Offcuts in `offcuts` no shorter than `minOffcutMm` are free
+ * bars used first. Pieces longer than every bar are not cut and come back in `tooLong` (the
+ * framing engine splits long joists itself). Throws a clear Error on bad input. Results are cached by
+ * input; treat them as read-only.
+ */
+export function solveCutList(input: CutListInput, options: CutListOptions = {}): CutListResult {
+  const parsed = cutListInputSchema.safeParse(input);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    const where = issue.path.length ? ` (at ${issue.path.join('.')})` : '';
+    throw new Error(`Bad cut list input: ${issue.message}${where}`);
+  }
+  const inp = parsed.data;
+  const budget = options.budget ?? DEFAULT_BUDGET;
+  const key = JSON.stringify([inp, budget]);
+  const hit = cache.get(key);
+  if (hit) {
+    cache.delete(key);
+    cache.set(key, hit);
+    return cloneResult(hit);
+  }
+  const result = solve(inp, budget);
+  cache.set(key, result);
+  if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value as string);
+  return cloneResult(result);
+}
+
+function cloneResult(r: CutListResult): CutListResult {
+  return {
+    ...r,
+    stock: r.stock.map((s) => ({ ...s, cuts: s.cuts.slice() })),
+    ...(r.tooLong ? { tooLong: r.tooLong.slice() } : {}),
+  };
+}
+
+type ParsedInput = z.output<typeof cutListInputSchema>;
+
+/** Group equal values: [value, count] pairs, largest value first. */
+function grouped(values: { v: number; n: number }[]): [number, number][] {
+  const m = new Map<number, number>();
+  for (const { v, n } of values) if (n > 0) m.set(v, (m.get(v) ?? 0) + n);
+  return [...m.entries()].sort((a, b) => b[0] - a[0]);
+}
+
+/** The packing problem for an input, and the pieces no bar can hold. */
+export function buildProblem(inp: ParsedInput): { problem: Problem; tooLong: number[] } {
+  const kerf = inp.kerfMm;
+  const stockList = Array.isArray(inp.stockMm) ? inp.stockMm : [inp.stockMm];
+  const minOff = inp.minOffcutMm ?? 0;
+  const types: BinType[] = [];
+  for (const [s] of grouped(stockList.map((v) => ({ v, n: 1 }))))
+    types.push({ stockMm: s, cap: s + kerf, cost: s, avail: Infinity, offcut: false });
+  const offs = (inp.offcuts ?? []).filter((o) => o >= minOff);
+  for (const [o, n] of grouped(offs.map((v) => ({ v, n: 1 }))))
+    types.push({ stockMm: o, cap: o + kerf, cost: 0, avail: n, offcut: true });
+  const longest = Math.max(...types.map((t) => t.stockMm));
+  const tooLong: number[] = [];
+  const lens: number[] = [];
+  const demand: number[] = [];
+  for (const [l, n] of grouped(inp.pieces.map((pc) => ({ v: pc.lengthMm, n: pc.qty })))) {
+    if (l > longest) {
+      for (let k = 0; k < n; k++) tooLong.push(l);
+      continue;
+    }
+    lens.push(l);
+    demand.push(n);
+  }
+  // Pieces longer than every offcut but within stock must not count free offcut room they cannot use:
+  // the bounds stay valid (they only ever subtract available room) and the searches check fits.
+  return {
+    problem: { kerf, lens, sizes: lens.map((l) => l + kerf), demand, types },
+    tooLong,
+  };
+}
+
+function solve(inp: ParsedInput, budget: number): CutListResult {
+  const { problem: p, tooLong } = buildProblem(inp);
+  const extra = tooLong.length ? { tooLong } : {};
+  if (p.lens.length === 0)
+    return { count: 0, stock: [], lowerBound: 0, optimal: true, totalStockMm: 0, ...extra };
+
+  const lowerBound = countLowerBound(p);
+  let floor: Score;
+  if (isSingleStock(p)) {
+    const n = l2Bound(p.sizes, p.demand, p.types[0].cap);
+    floor = { cost: n * p.types[0].cost, count: n };
+  } else {
+    let w = 0;
+    for (let i = 0; i < p.sizes.length; i++) w += p.sizes[i] * p.demand[i];
+    floor = remainingBound(
+      p,
+      w,
+      p.types.map((t) => t.avail),
+    );
+  }
+
+  const hasOffcuts = p.types.some((t) => t.offcut);
+  const tries: (() => Bin[])[] = [
+    () => fitDecreasing(p, false, false),
+    () => fitDecreasing(p, true, false),
+    () => greedyFill(p, true),
+    () => greedyFill(p, false),
+  ];
+  if (hasOffcuts) {
+    tries.push(() => fitDecreasing(p, false, true));
+    tries.push(() => fitDecreasing(p, true, true));
+  }
+  let bins: Bin[] = [];
+  let score: Score = { cost: Infinity, count: Infinity };
+  for (const t of tries) {
+    const b = t();
+    const s = scoreOf(p, b);
+    if (better(s, score)) {
+      bins = b;
+      score = s;
+    }
+    if (!better(floor, score)) break; // already at the lower bound: proven optimal
+  }
+  let optimal = !better(floor, score);
+  if (!optimal) {
+    const ex = binCompletion(p, bins, score, floor, budget);
+    bins = ex.bins;
+    score = ex.score;
+    optimal = ex.complete || !better(floor, score);
+  }
+  return { ...toResult(p, bins), lowerBound, optimal, ...extra };
+}
+
+function round3(x: number): number {
+  return Math.round(x * 1000) / 1000;
+}
+
+/** Bars as the crew reads them: new stock longest first, then offcuts; cuts longest first. */
+function toResult(
+  p: Problem,
+  bins: Bin[],
+): { count: number; stock: CutStock[]; totalStockMm: number } {
+  const stock: CutStock[] = bins.map((b) => {
+    const ty = p.types[b.type];
+    const cuts: number[] = [];
+    let sum = 0;
+    for (let i = 0; i < p.lens.length; i++)
+      for (let k = 0; k < b.counts[i]; k++) {
+        cuts.push(p.lens[i]);
+        sum += p.lens[i];
+      }
+    const offcutMm = round3(Math.max(0, ty.stockMm - sum - cuts.length * p.kerf));
+    const s: CutStock = { stockMm: ty.stockMm, cuts, offcutMm };
+    if (ty.offcut) s.fromOffcut = true;
+    return s;
+  });
+  stock.sort((a, b) => {
+    if (!!a.fromOffcut !== !!b.fromOffcut) return a.fromOffcut ? 1 : -1;
+    if (a.stockMm !== b.stockMm) return b.stockMm - a.stockMm;
+    for (let i = 0; i < Math.min(a.cuts.length, b.cuts.length); i++)
+      if (a.cuts[i] !== b.cuts[i]) return b.cuts[i] - a.cuts[i];
+    return b.cuts.length - a.cuts.length;
+  });
+  const fresh = stock.filter((s) => !s.fromOffcut);
+  return {
+    count: fresh.length,
+    stock,
+    totalStockMm: round3(fresh.reduce((a, s) => a + s.stockMm, 0)),
+  };
+}

@@ -124,6 +124,10 @@ export interface QuantityLine {
   product?: string;
   /** How the number was worked out, and its source. */
   basis: string;
+  /** Which variant of the product, where the catalogue has several (clips: starter, middle, finishing). */
+  variant?: string;
+  /** For 'each' lines of things cut to length (posts): the length each one needs, mm. */
+  pieceMm?: number;
 }
 
 export interface CutStock {

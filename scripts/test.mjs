@@ -69,7 +69,8 @@ step('integration', () =>
     env,
   ),
 );
-const distDir = '.next-test';
+// The default build folder: next build rewrites tsconfig.json's include list for any other.
+const distDir = process.env.NEXT_DIST_DIR || '.next';
 step('build', () =>
   run('npx', ['next', 'build'], { ...env, NODE_ENV: 'production', NEXT_DIST_DIR: distDir }),
 );

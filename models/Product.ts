@@ -31,7 +31,8 @@ export interface ProductMaterial {
   EMPa: number;
   fbMPa: number;
   fvMPa: number;
-  densityKgM3: number;
+  /** Optional: self-weight is added to the dead load only when a density is given. */
+  densityKgM3?: number;
 }
 
 /** Largest joist centres a board may span, laid square to the joists and at an angle. */

@@ -87,12 +87,12 @@ export function toResponse(err: unknown): Response {
 }
 
 /** Wraps a route handler so every error is answered by toResponse. */
-export function handle<Ctx = unknown>(
-  fn: (req: Request, ctx: Ctx) => Promise<Response>,
-): (req: Request, ctx: Ctx) => Promise<Response> {
-  return async (req, ctx) => {
+export function handle<Args extends unknown[]>(
+  fn: (req: Request, ...args: Args) => Promise<Response>,
+): (req: Request, ...args: Args) => Promise<Response> {
+  return async (req, ...args) => {
     try {
-      return await fn(req, ctx);
+      return await fn(req, ...args);
     } catch (err) {
       return toResponse(err);
     }

@@ -10,6 +10,8 @@ if (!process.env.DATABASE_URL) {
 }
 // The test script passes the real secret; a standalone run gets a fixed one.
 process.env.NEXTAUTH_SECRET ||= 'integration-test-secret';
+// Models are usable straight away in tests (services call db() themselves).
+db();
 
 afterAll(async () => {
   await closeDb();

@@ -5,13 +5,13 @@ import { handle, readJson } from '@/lib/server/errors';
 
 type Ctx = { params: Promise<{ id: string }> };
 
-export const GET = handle<Ctx>(async (req, { params }) => {
+export const GET = handle(async (req, { params }: Ctx) => {
   const user = await requireUser(req);
   const { id } = await params;
   return Response.json(await getDesign(user, id));
 });
 
-export const PUT = handle<Ctx>(async (req, { params }) => {
+export const PUT = handle(async (req, { params }: Ctx) => {
   const user = await requireUser(req);
   const { id } = await params;
   return Response.json(await saveDesign(user, id, await readJson(req)));

@@ -5,7 +5,7 @@ import { handle } from '@/lib/server/errors';
 
 type Ctx = { params: Promise<{ id: string }> };
 
-export const GET = handle<Ctx>(async (req, { params }) => {
+export const GET = handle(async (req, { params }: Ctx) => {
   const user = await requireUser(req);
   const { id } = await params;
   return Response.json(await listRevisions(user, id));

@@ -5,7 +5,7 @@ import { handle, readJson } from '@/lib/server/errors';
 
 type Ctx = { params: Promise<{ id: string }> };
 
-export const POST = handle<Ctx>(async (req, { params }) => {
+export const POST = handle(async (req, { params }: Ctx) => {
   const user = await requireUser(req);
   const { id } = await params;
   return Response.json(await createDesign(user, id, await readJson(req)), { status: 201 });

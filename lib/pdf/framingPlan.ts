@@ -184,15 +184,12 @@ function drawLegend(doc: jsPDF, g: SheetGeometry, x: number, y: number, w: numbe
   const sample = 9;
   type Item = [string, (sx: number, sy: number) => void];
   const items: Item[] = [
-    ['Joist (single)', (sx, sy) => drawJoistLine(doc, [sx, sy], [sx + sample, sy], 1, false)],
+    ['Joist (single)', (sx, sy) => drawJoistLine(doc, [sx, sy], [sx + sample, sy], 1)],
     [
       'Paired joist (butt joint)',
-      (sx, sy) => drawJoistLine(doc, [sx, sy], [sx + sample, sy], 2, true),
+      (sx, sy) => drawJoistLine(doc, [sx, sy], [sx + sample, sy], 2, 2),
     ],
-    [
-      'Triple joist (border)',
-      (sx, sy) => drawJoistLine(doc, [sx, sy], [sx + sample, sy], 3, false),
-    ],
+    ['Triple joist (border)', (sx, sy) => drawJoistLine(doc, [sx, sy], [sx + sample, sy], 3, 3)],
     [
       'Rim',
       (sx, sy) => {
@@ -240,7 +237,7 @@ function drawLegend(doc: jsPDF, g: SheetGeometry, x: number, y: number, w: numbe
     [
       'Joist join (on support)',
       (sx, sy) => {
-        drawJoistLine(doc, [sx, sy], [sx + sample, sy], 1, false);
+        drawJoistLine(doc, [sx, sy], [sx + sample, sy], 1);
         doc.setDrawColor(0);
         doc.setLineWidth(0.2);
         doc.setFillColor(255, 255, 255);
@@ -275,7 +272,7 @@ function drawLegend(doc: jsPDF, g: SheetGeometry, x: number, y: number, w: numbe
   });
   doc.setFontSize(g.font - 1);
   doc.setTextColor(60);
-  const tail = 'x2 / x3 on the joist chain: a paired or triple joist at that position.';
+  const tail = 'x2 / x3 on the joist chain: two or three pieces side by side there.';
   const ty = y + 7 + Math.ceil(items.length / 2) * rowH;
   doc.text(fit(doc, tail, w), x, ty);
   doc.setTextColor(0);
@@ -333,7 +330,7 @@ function drawScaleAndAxes(
 
   // Axes: x to the right, y up the sheet, and the board and joist directions.
   const ox = x + w - 22;
-  const oy = y + 19;
+  const oy = y + 14;
   const arrow = (dx: number, dy: number, len: number, label: string, dashed: boolean) => {
     const ex = ox + dx * len;
     const ey = oy + dy * len;
@@ -361,7 +358,7 @@ function drawScaleAndAxes(
   // Board and joist directions, drawn from their own origin below the axes.
   const a = (design.boardAngleDeg * Math.PI) / 180;
   const bx = x + 6;
-  const byy = y + 20;
+  const byy = y + 17;
   doc.setFontSize(g.font - 0.5);
   doc.setLineWidth(0.25);
   doc.setDrawColor(150, 90, 20);
@@ -377,11 +374,12 @@ function drawScaleAndAxes(
   doc.text('joists (solid)', bx + 7, byy + 2.5);
   doc.setFontSize(g.font - 1);
   doc.setTextColor(60);
-  doc.text('Plan axes as drawn in the design; no north given.', x, y + 29);
+  doc.text('Plan axes as drawn in the design; no north given.', x, y + 25);
   doc.setTextColor(0);
-  return y + 31;
+  return y + 26;
 }
 
+/** The cautions on every plan sheet; the font shrinks (to 5 pt) before any caution is dropped. */
 function drawCautionBox(
   doc: jsPDF,
   g: SheetGeometry,
@@ -395,9 +393,6 @@ function drawCautionBox(
   doc.setFontSize(g.font + 1.5);
   doc.text('Cautions', x, y + 3);
   doc.setFont('helvetica', 'normal');
-  doc.setFontSize(g.font);
-  const lineH = g.font * PT_MM * 1.25;
-  let cy = y + 7;
   const errors = plan.flags.filter((f) => f.severity === 'error').length;
   const warnings = plan.flags.filter((f) => f.severity === 'warning').length;
   const items = [
@@ -405,14 +400,19 @@ function drawCautionBox(
     errors || warnings
       ? `This plan has ${errors} error${errors === 1 ? '' : 's'} and ${warnings} warning${warnings === 1 ? '' : 's'} (numbered markers; listed under "Checks to resolve"). Do not build until the errors are cleared.`
       : 'The checks found no errors or warnings.',
-    'Work to the figured dimensions (mm unless marked); do not scale from the print.',
-  ];
-  for (const item of items) {
-    const lines: string[] = doc.splitTextToSize(pdfText(item), w);
-    if (cy + (lines.length + 1) * lineH > bottom) {
-      doc.text('(see Notes on the schedule sheet)', x, cy + lineH * 0.8);
-      break;
-    }
+  ].map(pdfText);
+  let size = g.font;
+  let laid: string[][] = [];
+  let lineH = 0;
+  for (; size >= 5; size -= 0.5) {
+    doc.setFontSize(size);
+    lineH = size * PT_MM * 1.25;
+    laid = items.map((item) => doc.splitTextToSize(item, w) as string[]);
+    const h = laid.reduce((s, l) => s + l.length * lineH + 1.2, 0);
+    if (y + 6 + h <= bottom) break;
+  }
+  let cy = y + 6;
+  for (const lines of laid) {
     lines.forEach((l, k) => doc.text(l, x, cy + lineH * (0.8 + k)));
     cy += lines.length * lineH + 1.2;
   }
@@ -520,6 +520,8 @@ export function framingPlanPdf(input: FramingPlanInput): Uint8Array {
         doc.rect(a[0], a[1], b[0] - a[0], b[1] - a[1], 'S');
         doc.setLineDashPattern([], 0);
         doc.setTextColor(190, 100, 0);
+        doc.setFillColor(255, 255, 255);
+        doc.rect(a[0] + 1, a[1] + 1, doc.getTextWidth(`Part ${p.label}`) + 1, 4, 'F');
         doc.text(`Part ${p.label}`, a[0] + 1.5, a[1] + 4);
         doc.setTextColor(0);
       }
@@ -545,7 +547,7 @@ export function framingPlanPdf(input: FramingPlanInput): Uint8Array {
     y = drawScaleAndAxes(doc, g, x, y, w, view.scale, units, design, axes) + 2;
     let cautionBottom = titleTop - 3;
     if (parts.length) {
-      const keyH = g.paper === 'a3' ? 42 : 32;
+      const keyH = g.paper === 'a3' ? 42 : 28;
       drawKeyPlan(doc, g, plan, parts, current, {
         x0: x,
         y0: titleTop - keyH - 2,

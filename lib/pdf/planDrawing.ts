@@ -3,7 +3,7 @@ import type { jsPDF } from 'jspdf';
 import type { DesignDocument } from '@/engine/schema';
 import type { FramePlan, Member } from '@/engine/types';
 import type { UnitSystem } from '@/lib/units';
-import { sortedFlags, supportRowPositions } from './schedules';
+import { orderedSupportRows, sortedFlags } from './schedules';
 import { dimText, pdfText } from './text';
 
 export type V2 = [number, number];
@@ -75,18 +75,16 @@ function cluster(values: ClusterItem[], tol: number) {
   return out;
 }
 
-/** Joists standing side by side at one position: the most plies over any point along the joists. */
-function pliesSideBySide(members: Member[], j: V2): number {
+/** Joists standing side by side in one group: the most pieces over any point along the joists. */
+function piecesSideBySide(members: Member[], j: V2): number {
   let best = 0;
   for (const m of members) {
     const t = dot(mid(m), j);
-    const sum = members
-      .filter((o) => {
-        const a = dot(o.a as V2, j);
-        const b = dot(o.b as V2, j);
-        return t >= Math.min(a, b) - 1 && t <= Math.max(a, b) + 1;
-      })
-      .reduce((s, o) => s + o.ply, 0);
+    const sum = members.filter((o) => {
+      const a = dot(o.a as V2, j);
+      const b = dot(o.b as V2, j);
+      return t >= Math.min(a, b) - 1 && t <= Math.max(a, b) + 1;
+    }).length;
     best = Math.max(best, sum);
   }
   return best;
@@ -131,15 +129,20 @@ export function planChains(plan: FramePlan, design: DesignDocument, axes: FrameA
     });
   }
 
-  const joists = plan.members.filter(
-    (m) => m.kind === 'joist' && m.role !== 'stair' && m.step === undefined,
-  );
+  // Every joist or rim running with the joists (edge rims included), outside the step frames.
+  const joists = plan.members.filter((m) => {
+    if ((m.kind !== 'joist' && m.kind !== 'rim') || m.step !== undefined || m.role === 'stair')
+      return false;
+    const l = Math.hypot(m.b[0] - m.a[0], m.b[1] - m.a[1]);
+    return l > 0 && Math.abs(((m.b[0] - m.a[0]) * j[0] + (m.b[1] - m.a[1]) * j[1]) / l) > 0.99;
+  });
+  // Pieces closer than about two joist widths read as one group on the chain ("x2", "x3").
   const jc = cluster(
-    joists.map((m) => ({ at: dot(mid(m), p), main: m.role !== 'butt-pair', member: m })),
-    design.joist.widthMm + 15,
+    joists.map((m) => ({ at: dot(mid(m), p), main: true, member: m })),
+    2 * design.joist.widthMm + 10,
   ).map((c) => ({
     at: c.at,
-    weight: pliesSideBySide(
+    weight: piecesSideBySide(
       c.items.map((i) => i.member as Member),
       j,
     ),
@@ -159,7 +162,7 @@ export function planChains(plan: FramePlan, design: DesignDocument, axes: FrameA
   const ext = along(j);
   const datum = Math.min(...ext);
   if (plan.supportRows.length) {
-    const rows = supportRowPositions(plan, j).map((v) => v + datum);
+    const rows = orderedSupportRows(plan, j).map((r) => r.atMm + datum);
     chains.push({
       kind: 'supports',
       dir: j,
@@ -461,30 +464,28 @@ function band(v: View, a: V2, b: V2, widthMm: number, minPaper: number): V2[] {
 /** Line styles of the plan, shared with the legend so the two always agree. */
 export const STYLES = {
   joist: { width: 0.3, color: [0, 0, 0] as const },
-  pair: { width: 0.2, color: [20, 60, 150] as const, gap: 0.7 },
-  triple: { width: 0.18, color: [0, 0, 0] as const, gap: 0.7 },
+  pair: { width: 0.3, color: [20, 70, 170] as const },
+  triple: { width: 0.3, color: [140, 70, 20] as const },
   rim: { width: 0.55, color: [0, 0, 0] as const },
   noggin: { width: 0.35, color: [70, 70, 70] as const, dash: [0.9, 0.6] },
   outline: { width: 0.2, color: [110, 110, 110] as const },
 } as const;
 
-/** Draws a joist line in its ply's style: single, double (pair) or triple line. */
-export function drawJoistLine(doc: jsPDF, pa: V2, pb: V2, ply: number, pairRole: boolean) {
+/**
+ * Draws one joist piece in its ply's style: black for single joists, blue for pieces of a pair,
+ * brown for pieces of a triple. With copies > 1 (legend samples) draws that many side by side.
+ */
+export function drawJoistLine(doc: jsPDF, pa: V2, pb: V2, ply: number, copies = 1) {
   const l = Math.hypot(pb[0] - pa[0], pb[1] - pa[1]) || 1;
   const n: V2 = [-(pb[1] - pa[1]) / l, (pb[0] - pa[0]) / l];
+  const s = ply >= 3 ? STYLES.triple : ply === 2 ? STYLES.pair : STYLES.joist;
   doc.setLineDashPattern([], 0);
-  if (ply === 1 && !pairRole) {
-    doc.setDrawColor(...STYLES.joist.color);
-    doc.setLineWidth(STYLES.joist.width);
-    doc.line(pa[0], pa[1], pb[0], pb[1]);
-    return;
-  }
-  const s = ply >= 3 ? STYLES.triple : STYLES.pair;
   doc.setDrawColor(s.color[0], s.color[1], s.color[2]);
   doc.setLineWidth(s.width);
-  const offsets = ply >= 3 ? [-s.gap, 0, s.gap] : [-s.gap / 2, s.gap / 2];
-  for (const o of offsets)
+  for (let k = 0; k < copies; k++) {
+    const o = (k - (copies - 1) / 2) * 0.75;
     doc.line(pa[0] + n[0] * o, pa[1] + n[1] * o, pb[0] + n[0] * o, pb[1] + n[1] * o);
+  }
 }
 
 /** Draws a noggin as a short dashed bar. */
@@ -532,7 +533,7 @@ export function drawPost(doc: jsPDF, c: V2, side: number) {
   doc.setLineWidth(0.2);
   doc.setLineDashPattern([], 0);
   doc.setFillColor(255, 255, 255);
-  doc.circle(c[0], c[1], side * 1.05, 'FD');
+  doc.circle(c[0], c[1], side * 0.95, 'FD');
   doc.setFillColor(0, 0, 0);
   doc.rect(c[0] - side / 2, c[1] - side / 2, side, side, 'F');
 }
@@ -667,14 +668,24 @@ export function drawPlan(doc: jsPDF, o: DrawPlanOptions): void {
   });
 
   // Members: noggins, then joists, then rims on top; posts and pads last.
-  const members = plan.members;
+  // Part sheets skip what lies wholly outside their window (a large deck has thousands of pieces).
+  const m0 = v.part ? 300 : Infinity;
+  const members = plan.members.filter(
+    (m) =>
+      !v.part ||
+      !(
+        Math.max(m.a[0], m.b[0]) < win.x0 - m0 ||
+        Math.min(m.a[0], m.b[0]) > win.x1 + m0 ||
+        Math.max(m.a[1], m.b[1]) < win.y0 - m0 ||
+        Math.min(m.a[1], m.b[1]) > win.y1 + m0
+      ),
+  );
   for (const m of members) if (m.kind === 'noggin') drawNogginLine(doc, P(m.a as V2), P(m.b as V2));
   for (const m of members)
-    if (m.kind === 'joist')
-      drawJoistLine(doc, P(m.a as V2), P(m.b as V2), m.ply, m.role === 'butt-pair');
+    if (m.kind === 'joist') drawJoistLine(doc, P(m.a as V2), P(m.b as V2), m.ply);
   for (const m of members)
     if (m.kind === 'rim') {
-      if (m.ply > 1) drawJoistLine(doc, P(m.a as V2), P(m.b as V2), m.ply, false);
+      if (m.ply > 1) drawJoistLine(doc, P(m.a as V2), P(m.b as V2), m.ply);
       else {
         doc.setDrawColor(...STYLES.rim.color);
         doc.setLineWidth(STYLES.rim.width);
@@ -688,7 +699,7 @@ export function drawPlan(doc: jsPDF, o: DrawPlanOptions): void {
   for (const m of members) {
     if (m.kind === 'pad')
       drawPad(doc, P(m.a as V2), Math.max(440 / v.scale, 2), Math.max(215 / v.scale, 1.1), jp);
-    if (m.kind === 'post') drawPost(doc, P(m.a as V2), Math.max(100 / v.scale, 1.4));
+    if (m.kind === 'post') drawPost(doc, P(m.a as V2), Math.max(100 / v.scale, 1.1));
   }
   if (!o.overview) {
     doc.setLineWidth(0.2);
@@ -702,7 +713,7 @@ export function drawPlan(doc: jsPDF, o: DrawPlanOptions): void {
     doc.setFont('helvetica', 'normal');
     doc.setFontSize(style.dimFont - 0.5);
     doc.setTextColor(80);
-    plan.supportRows.forEach((r, i) => {
+    orderedSupportRows(plan, axes.j).forEach(({ row: r }, i) => {
       const a = P(r.a as V2);
       const b = P(r.b as V2);
       const start = a[0] <= b[0] ? a : b;
@@ -739,6 +750,8 @@ export function drawPlan(doc: jsPDF, o: DrawPlanOptions): void {
     doc.text(l1, c[0] - doc.getTextWidth(l1) / 2, c[1] - 0.6);
     doc.text(l2, c[0] - doc.getTextWidth(l2) / 2, c[1] + 1.8);
   });
+  // Flag markers, numbered as in "Checks to resolve"; markers on one spot step sideways.
+  const placed: V2[] = [];
   sortedFlags(plan).forEach((f, i) => {
     if (f.severity === 'info') return;
     const inWin =
@@ -746,14 +759,18 @@ export function drawPlan(doc: jsPDF, o: DrawPlanOptions): void {
       f.at[0] <= win.x1 + 1 &&
       f.at[1] >= win.y0 - 1 &&
       f.at[1] <= win.y1 + 1;
-    if (inWin) drawFlagMarker(doc, P(f.at as V2), i + 1, f.severity);
+    if (!inWin) return;
+    const c = P(f.at as V2);
+    while (placed.some((q) => Math.hypot(q[0] - c[0], q[1] - c[1]) < 3.6)) c[0] += 4;
+    placed.push([c[0], c[1]]);
+    drawFlagMarker(doc, c, i + 1, f.severity);
   });
   if (v.part) doc.restoreGraphicsState();
 
   // Dimension chains.
   for (const c of o.chains) {
     if (v.part && c.kind === 'overall') continue;
-    if (o.overview && c.kind === 'noggins') continue;
+    if (o.overview && (c.kind === 'noggins' || c.kind === 'joists')) continue;
     let clip: { lo: number; hi: number; base: number } | undefined;
     if (v.part) {
       const corners: V2[] = [

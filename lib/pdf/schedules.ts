@@ -1,7 +1,14 @@
 // The framing plan's tables as plain rows of text: member, footing, cut list, quantities, flags, notes.
 import { STANDING_CAUTION } from '@/engine/codes';
 import type { DesignDocument } from '@/engine/schema';
-import type { CutListResult, FramePlan, Member, MemberRole, Severity } from '@/engine/types';
+import type {
+  CutListResult,
+  FramePlan,
+  Member,
+  MemberRole,
+  Severity,
+  SupportRowPlan,
+} from '@/engine/types';
 import type { UnitSystem } from '@/lib/units';
 import { len, pdfText } from './text';
 
@@ -116,16 +123,24 @@ export function memberSchedule(plan: FramePlan, units: UnitSystem): Table {
     ],
     rows,
     notes: [
-      'Lengths are cut lengths of one piece; a double or triple joist counts as one line of the given ply.',
+      'Each line counts single pieces at their cut length; a double or triple joist is two or three pieces side by side.',
     ],
   };
 }
 
-/** Where each support row sits, measured along the joists from the datum (smallest projection). */
-export function supportRowPositions(plan: FramePlan, joistDir: [number, number]): number[] {
+/**
+ * The support rows in the order the crew meets them along the joists, each with its distance from
+ * the datum (the deck edge where the joists start). Row numbers on the plan and schedule follow it.
+ */
+export function orderedSupportRows(
+  plan: FramePlan,
+  joistDir: [number, number],
+): { row: SupportRowPlan; atMm: number }[] {
   const proj = (p: [number, number]) => p[0] * joistDir[0] + p[1] * joistDir[1];
   const datum = Math.min(...plan.outline.map(proj));
-  return plan.supportRows.map((r) => (proj(r.a) + proj(r.b)) / 2 - datum);
+  return plan.supportRows
+    .map((row) => ({ row, atMm: (proj(row.a) + proj(row.b)) / 2 - datum }))
+    .sort((a, b) => a.atMm - b.atMm);
 }
 
 /** Footing schedule: support rows, pads and posts with block counts and trench or hole depths. */
@@ -137,10 +152,9 @@ export function footingSchedule(
 ): Table {
   const rows: string[][] = [];
   const trench = len(TRENCH_BELOW_BLOCK_TOP_MM, units);
-  const positions = supportRowPositions(plan, joistDir);
-  plan.supportRows.forEach((r, i) => {
+  orderedSupportRows(plan, joistDir).forEach(({ row: r, atMm }, i) => {
     const lengthMm = Math.hypot(r.b[0] - r.a[0], r.b[1] - r.a[1]);
-    const at = `at ${len(positions[i], units)}`;
+    const at = `at ${len(atMm, units)}`;
     switch (r.kind) {
       case 'blocks':
         rows.push([
@@ -312,6 +326,7 @@ export function quantitiesTable(plan: FramePlan): Table {
 /** Flags, worst first, numbered as on the plan. */
 export function sortedFlags(plan: FramePlan): FramePlan['flags'] {
   return plan.flags
+    .filter((f) => f.code !== 'caution')
     .map((f, i) => ({ f, i }))
     .sort((a, b) => SEVERITY_ORDER[a.f.severity] - SEVERITY_ORDER[b.f.severity] || a.i - b.i)
     .map(({ f }) => f);
@@ -322,8 +337,9 @@ export function flagsTable(plan: FramePlan, units: UnitSystem): Table {
   const rows = sortedFlags(plan).map((f, i) => [
     String(i + 1),
     f.severity === 'error' ? 'ERROR' : f.severity === 'warning' ? 'Warning' : 'Info',
+    // The engine words its messages in mm; imperial readers also get the figures in their units.
     pdfText(f.message) +
-      (f.valueMm !== undefined && f.limitMm !== undefined
+      (units === 'imperial' && f.valueMm !== undefined && f.limitMm !== undefined
         ? ` (${len(f.valueMm, units)} against ${len(f.limitMm, units)})`
         : ''),
     pdfText(f.source ?? ''),

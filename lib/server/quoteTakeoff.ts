@@ -1,20 +1,40 @@
 // The priced take-off of a design, for quoting: frame plan -> take-off -> catalogue prices.
-import type { DesignDocument } from '@/engine/schema';
-import type { PricedTakeOff } from '@/engine/takeoff/price';
+import { parseDesign, planFrame } from '@/engine';
+import type { PricedProduct, PricedTakeOff } from '@/engine/takeoff/price';
+import { priceTakeOff } from '@/engine/takeoff/price';
 import type { Product } from '@/models';
 
-/**
- * The design's priced take-off and deck area, or undefined when the design cannot be laid out.
- * WARNING: waits for the framing engine's planFrame (engine/index.ts); until it lands, quotes start
- * with labour only and the designer adds material lines by hand.
- */
+/** Allowance on counted items (clips, screws, membrane...); cut-list stock already carries its offcuts. Common practice. */
+export const QUOTE_WASTE_PCT = 5;
+
+/** The design's priced take-off and deck area, or undefined when the design cannot be laid out. */
 export function designTakeoff(
-  doc: DesignDocument,
+  raw: unknown,
   products: Product[],
   currency: string,
 ): { priced: PricedTakeOff; areaM2: number } | undefined {
-  void doc;
-  void products;
-  void currency;
-  return undefined;
+  const parsed = parseDesign(raw);
+  if (!parsed.ok) return undefined;
+  let plan;
+  try {
+    plan = planFrame(parsed.design);
+  } catch {
+    return undefined;
+  }
+  const catalogue: PricedProduct[] = products.map((p) => ({
+    id: p.id,
+    kind: p.kind,
+    name: p.name,
+    unitPrice: Number(p.unitPrice),
+    unit: p.unit,
+    stockLengthsMm: p.stockLengthsMm,
+    dimensions: p.dimensions,
+    currency,
+  }));
+  const priced = priceTakeOff(plan.quantities, catalogue, {
+    wastePct: QUOTE_WASTE_PCT,
+    choices: parsed.design.products,
+    currency,
+  });
+  return { priced, areaM2: plan.areaM2 };
 }

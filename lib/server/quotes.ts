@@ -240,7 +240,7 @@ export async function createQuote(
     const products = await models.Product.findAll({
       where: { firmId: actor.firmId, active: true },
     });
-    const t = designTakeoff(design.document as DesignDocument, products, currency);
+    const t = designTakeoff(design.document, products, currency);
     if (t) {
       lines.push(...materialLines(t.priced));
       areaM2 = t.areaM2;

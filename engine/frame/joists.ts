@@ -1,0 +1,144 @@
+// Places joist lines: field joists at the set centres, edge joists, border joists; clips them to the outline. Pure: engine only.
+import type { MemberRole, Ply } from '../types';
+import { distToSegment, subtractInterval } from '../geometry';
+import { verticalsInside } from '../clip';
+import type { EdgeInfo, FrameContext, JoistLine } from './model';
+
+/** Lines shorter than this (mm) are left out: too short to fix a board to. */
+const MIN_LINE_MM = 100;
+
+interface Candidate {
+  x: number;
+  role: MemberRole;
+  kind: 'joist' | 'rim';
+  ply: Ply;
+  /** Restrict to this y-range (border joists follow their edge only). */
+  range?: [number, number];
+}
+
+/** The edge whose rim a line end at (x, y) butts against: the nearest edge that crosses the joists. */
+export function endEdgeAt(ctx: FrameContext, x: number, y: number): EdgeInfo | null {
+  let best: EdgeInfo | null = null;
+  let bestD = Infinity;
+  for (const e of ctx.edges) {
+    if (e.kind === 'parallel') continue;
+    const d = distToSegment([x, y], e.a, e.b);
+    if (d < bestD) {
+      bestD = d;
+      best = e;
+    }
+  }
+  return best;
+}
+
+/**
+ * Lays out every joist line of the deck: edge joists along edges that run with the joists, field
+ * joists at the set centres from the first edge, and (with a border course) two border joists
+ * beside each edge joist where the field boards end. Lines are clipped to the outline with the
+ * polygon library, then shortened at each end by the rim they butt against.
+ */
+export function placeJoistLines(ctx: FrameContext): JoistLine[] {
+  const { design, w, bounds } = ctx;
+  const c = design.joistCentresMm;
+  const candidates: Candidate[] = [];
+  const edgeRims: { x: number; lo: number; hi: number; edge: EdgeInfo }[] = [];
+  for (const e of ctx.edges) {
+    if (e.kind !== 'parallel') continue;
+    const lo = Math.min(e.rimA[1], e.rimB[1]);
+    const hi = Math.max(e.rimA[1], e.rimB[1]);
+    if (hi - lo < MIN_LINE_MM) continue;
+    edgeRims.push({ x: (e.rimA[0] + e.rimB[0]) / 2, lo, hi, edge: e });
+  }
+  const first = bounds.minX + w / 2;
+  for (let x = first + c; x < bounds.maxX - w / 2; x += c) {
+    candidates.push({ x, role: 'field', kind: 'joist', ply: 1 });
+  }
+  const blockers: { x: number; lo: number; hi: number }[] = edgeRims.map((r) => ({
+    x: r.x,
+    lo: r.lo,
+    hi: r.hi,
+  }));
+  if (design.borderCourses > 0) {
+    const bw = design.board.widthMm;
+    const gap = design.board.gapMm;
+    // Field boards end in the gap inside the last border course: two joists straddle that line.
+    const fieldEnd = design.borderCourses * (bw + gap) - gap / 2;
+    for (const r of edgeRims) {
+      // Inward normal of a counter-clockwise ring points left of the edge direction.
+      const inward = -Math.sign(r.edge.uy);
+      const eLo = Math.min(r.edge.a[1], r.edge.b[1]);
+      const eHi = Math.max(r.edge.a[1], r.edge.b[1]);
+      const edgeX = r.edge.a[0];
+      for (const off of [fieldEnd - w / 2, fieldEnd + w / 2]) {
+        const x = edgeX + inward * off;
+        candidates.push({ x, role: 'border', kind: 'joist', ply: 3, range: [eLo, eHi] });
+        blockers.push({ x, lo: eLo, hi: eHi });
+      }
+    }
+  }
+  const xs = candidates.map((cd) => cd.x);
+  const inside = verticalsInside(ctx.ring, xs);
+  const lines: JoistLine[] = [];
+  let n = 0;
+  for (let i = 0; i < candidates.length; i++) {
+    const cd = candidates[i];
+    let ivs = inside[i];
+    if (cd.range) ivs = ivs.filter(([a, b]) => b > cd.range![0] && a < cd.range![1]);
+    const trimmed: [number, number][] = [];
+    for (const [a, b] of ivs) {
+      let y0 = a;
+      let y1 = b;
+      if (cd.range) {
+        y0 = Math.max(y0, cd.range[0]);
+        y1 = Math.min(y1, cd.range[1]);
+      }
+      y0 += trimAt(ctx, cd.x, y0);
+      y1 -= trimAt(ctx, cd.x, y1);
+      if (y1 - y0 >= MIN_LINE_MM) trimmed.push([y0, y1]);
+    }
+    let pieces = trimmed;
+    // A field joist may not sit on top of an edge joist or a border joist: cut it out there.
+    if (cd.role === 'field') {
+      for (const b of blockers) {
+        if (Math.abs(b.x - cd.x) < w) pieces = subtractInterval(pieces, b.lo - w, b.hi + w);
+      }
+    }
+    for (const [y0, y1] of pieces) {
+      if (y1 - y0 < MIN_LINE_MM) continue;
+      lines.push(makeLine(ctx, `L${++n}`, cd, y0, y1));
+    }
+  }
+  for (const r of edgeRims) {
+    const ply: Ply = design.borderCourses > 0 ? 3 : 1;
+    lines.push(makeLine(ctx, `L${++n}`, { x: r.x, role: 'edge', kind: 'rim', ply }, r.lo, r.hi));
+  }
+  lines.sort((a, b) => a.x - b.x || a.y0 - b.y0);
+  return lines;
+}
+
+/** How far a line end at (x, y) on the outline must move inward to stop at the rim's inner face. */
+function trimAt(ctx: FrameContext, x: number, y: number): number {
+  const e = endEdgeAt(ctx, x, y);
+  if (!e) return ctx.w;
+  // Perpendicular depth w along a vertical line is w / |cos| of the edge's angle to the boards.
+  return ctx.w / Math.max(Math.abs(e.ux), 0.05);
+}
+
+function makeLine(ctx: FrameContext, id: string, cd: Candidate, y0: number, y1: number): JoistLine {
+  const e0 = endEdgeAt(ctx, cd.x, y0);
+  const e1 = endEdgeAt(ctx, cd.x, y1);
+  return {
+    id,
+    x: cd.x,
+    y0,
+    y1,
+    kind: cd.kind,
+    role: cd.role,
+    ply: cd.ply,
+    endEdge: [e0 ? e0.index : -1, e1 ? e1.index : -1],
+    supports: [],
+    endSupported: [false, false],
+    bearY: [y0, y1],
+    pieces: [],
+  };
+}

@@ -21,18 +21,18 @@ const timberJoist = (sku: string) => ({
 });
 
 async function create(body: unknown, as: 'owner' | 'designer' | 'crew' | 'otherOwner' = 'owner') {
-  return POST(await request('POST', '/api/products', { as, body }), undefined as never);
+  return POST(await request('POST', '/api/products', { as, body }));
 }
 
 describe('GET /api/products', () => {
   it('answers 401 when signed out', async () => {
-    const res = await list(await request('GET', '/api/products'), undefined as never);
+    const res = await list(await request('GET', '/api/products'));
     expect(res.status).toBe(401);
   });
 
   it('lists only the firm’s own products, for every role', async () => {
     for (const as of ['owner', 'designer', 'crew'] as const) {
-      const res = await list(await request('GET', '/api/products', { as }), undefined as never);
+      const res = await list(await request('GET', '/api/products', { as }));
       expect(res.status).toBe(200);
       const items = await json<ProductDto[]>(res);
       expect(items.some((p) => p.sku === 'JST-RP-12550')).toBe(true);
@@ -43,22 +43,15 @@ describe('GET /api/products', () => {
   it('searches name and SKU, filters by kind', async () => {
     const res = await list(
       await request('GET', '/api/products?q=clip&kind=clip', { as: 'designer' }),
-      undefined as never,
     );
     const items = await json<ProductDto[]>(res);
     expect(items.length).toBeGreaterThanOrEqual(3);
     expect(items.every((p) => p.kind === 'clip')).toBe(true);
     const bySku = await json<ProductDto[]>(
-      await list(
-        await request('GET', '/api/products?q=blk-440', { as: 'owner' }),
-        undefined as never,
-      ),
+      await list(await request('GET', '/api/products?q=blk-440', { as: 'owner' })),
     );
     expect(bySku.map((p) => p.sku)).toEqual(['BLK-440215100']);
-    const bad = await list(
-      await request('GET', '/api/products?kind=spaceship', { as: 'owner' }),
-      undefined as never,
-    );
+    const bad = await list(await request('GET', '/api/products?kind=spaceship', { as: 'owner' }));
     expect(bad.status).toBe(400);
   });
 });
@@ -81,10 +74,7 @@ describe('POST /api/products', () => {
       expect(res.status).toBe(403);
     }
     const items = await json<ProductDto[]>(
-      await list(
-        await request('GET', `/api/products?q=T-${stamp}-designer`, { as: 'owner' }),
-        undefined as never,
-      ),
+      await list(await request('GET', `/api/products?q=T-${stamp}-designer`, { as: 'owner' })),
     );
     expect(items).toEqual([]);
   });
@@ -203,7 +193,7 @@ describe('/api/products/[id]', () => {
 describe('the engine reads limits from the stored products', () => {
   it('the seeded plastic joist gives the common-practice 1500 mm span at 400 mm centres; the board 400 mm', async () => {
     const items = await json<ProductDto[]>(
-      await list(await request('GET', '/api/products', { as: 'designer' }), undefined as never),
+      await list(await request('GET', '/api/products', { as: 'designer' })),
     );
     const joist = items.find((p) => p.sku === 'JST-RP-12550') as CatalogueProduct;
     const board = items.find((p) => p.sku === 'BRD-CMP-14025') as CatalogueProduct;

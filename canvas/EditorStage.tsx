@@ -16,7 +16,7 @@ import { drawSupportRows } from './kinds/support-row/draw';
 import { drawOverall, drawJoistCentres, drawRowChain } from './layers/dimensions';
 import { drawAxisMarker, drawGrid, drawScaleBar } from './layers/grid';
 import type { Ctx } from './layers/paint';
-import { panBy, screenPt, zoomAt, type ScreenPt } from './spaces';
+import { panBy, screenPt, toScreen, zoomAt, type ScreenPt } from './spaces';
 import { useEditor, useEditorStore } from './store/EditorStoreProvider';
 import { createToolMachine } from './tools/machine';
 
@@ -161,6 +161,17 @@ export default function EditorStage({ bottomInset = 0 }: { bottomInset?: number 
   const selection = ui.selection;
   const sel = (k: string) => (selection && selection.kind === k ? selection.index : null);
   const editable = !meta.readOnly;
+  const joists = plan ? plan.members.filter((m) => m.kind === 'joist').length : 0;
+  const flagCount = plan ? plan.flags.filter((f) => f.code !== 'caution').length : 0;
+  // Screen positions of row mid-points and corners: what a person sees, for assistive tech and tests.
+  const rowsOnScreen = supports.rows.map((r) => {
+    const m = toScreen(view, [(r.a[0] + r.b[0]) / 2, (r.a[1] + r.b[1]) / 2]);
+    return [Math.round(m[0]), Math.round(m[1])];
+  });
+  const cornersOnScreen = doc.outline.map((p) => {
+    const m = toScreen(view, p);
+    return [Math.round(m[0]), Math.round(m[1])];
+  });
 
   return (
     <div
@@ -169,9 +180,17 @@ export default function EditorStage({ bottomInset = 0 }: { bottomInset?: number 
       data-tool={ui.tool}
       data-tool-state={ui.toolState}
       data-scale={view.scale.toFixed(5)}
+      data-joists={joists}
+      data-rows={JSON.stringify(rowsOnScreen)}
+      data-corners={JSON.stringify(cornersOnScreen)}
       className="absolute inset-0 touch-none select-none overflow-hidden"
       style={{ touchAction: 'none', cursor: ui.tool === 'select' ? 'default' : 'crosshair' }}
     >
+      <p className="sr-only" aria-live="polite" data-testid="plan-summary">
+        {plan
+          ? `Frame: ${joists} joists, ${supports.rows.length} support rows, ${flagCount} flags.`
+          : 'Working out the frame.'}
+      </p>
       {size ? (
         <Stage width={size.width} height={size.height} listening={false}>
           <Layer listening={false}>

@@ -1,0 +1,153 @@
+'use client';
+// The editor's toolbar: tools, undo/redo/delete, view, snapping, and the always-visible save and flag counts.
+import { redo, undo, deleteSelection } from '@/canvas/commands/history';
+import {
+  fitToDeck,
+  outlineTool,
+  selectTool,
+  supportTool,
+  toggleBoards,
+  toggleLayer,
+  toggleSnap,
+  zoomIn,
+  zoomOut,
+} from '@/canvas/commands/view';
+import type { Command } from '@/canvas/commands/types';
+import { useEditor, useEditorStore } from '@/canvas/store/EditorStoreProvider';
+import { FlagSummary } from './FlagSummary';
+import { SaveStatus } from './SaveStatus';
+import { Icon, icons, ToolButton } from './ToolButton';
+
+function Divider() {
+  return <span aria-hidden="true" className="mx-0.5 h-7 w-px shrink-0 bg-ash-200" />;
+}
+
+export function Toolbar() {
+  const store = useEditorStore();
+  const s = useEditor((x) => x);
+  const readOnly = s.meta.readOnly;
+  const can = <A,>(c: Command<A>, args: A) =>
+    !(c.edits && readOnly) && (!c.predicate || c.predicate(s, args));
+  const run = <A,>(c: Command<A>, args: A) => store.getState().run(c, args);
+
+  return (
+    <div
+      role="toolbar"
+      aria-label="Plan tools"
+      className="flex items-center gap-1 overflow-x-auto border-b border-ash-200 bg-white px-2 py-1"
+    >
+      {readOnly ? (
+        <span className="mr-1 shrink-0 rounded-md bg-ash-100 px-2 py-1 text-xs font-semibold text-ash-700">
+          View only
+        </span>
+      ) : (
+        <>
+          <ToolButton
+            label="Select and move"
+            hint="V"
+            active={s.ui.tool === 'select'}
+            onClick={() => run(selectTool, undefined)}
+          >
+            <Icon d={icons.select} />
+          </ToolButton>
+          <ToolButton
+            label="Draw outline"
+            hint="O"
+            active={s.ui.tool === 'outline'}
+            onClick={() => run(outlineTool, undefined)}
+          >
+            <Icon d={icons.outline} />
+          </ToolButton>
+          <ToolButton
+            label="Add support row"
+            hint="S"
+            active={s.ui.tool === 'support'}
+            onClick={() => run(supportTool, undefined)}
+          >
+            <Icon d={icons.support} />
+          </ToolButton>
+          <Divider />
+          <ToolButton
+            label="Undo"
+            hint="Ctrl+Z"
+            disabled={!can(undo, undefined)}
+            onClick={() => run(undo, undefined)}
+          >
+            <Icon d={icons.undo} />
+          </ToolButton>
+          <ToolButton
+            label="Redo"
+            hint="Ctrl+Shift+Z"
+            disabled={!can(redo, undefined)}
+            onClick={() => run(redo, undefined)}
+          >
+            <Icon d={icons.redo} />
+          </ToolButton>
+          <ToolButton
+            label="Delete"
+            hint="Del"
+            disabled={!can(deleteSelection, undefined)}
+            onClick={() => run(deleteSelection, undefined)}
+          >
+            <Icon d={icons.trash} />
+          </ToolButton>
+          <Divider />
+        </>
+      )}
+      <ToolButton label="Fit deck" hint="F" onClick={() => run(fitToDeck, undefined)}>
+        <Icon d={icons.fit} />
+      </ToolButton>
+      <ToolButton label="Zoom in" hint="+" onClick={() => run(zoomIn, undefined)}>
+        <Icon d={icons.plus} />
+      </ToolButton>
+      <ToolButton label="Zoom out" hint="−" onClick={() => run(zoomOut, undefined)}>
+        <Icon d={icons.minus} />
+      </ToolButton>
+      <ToolButton
+        label="Show boards"
+        hint="B"
+        active={s.ui.layers.boards}
+        onClick={() => run(toggleBoards, undefined)}
+      >
+        <Icon d={icons.boards} />
+      </ToolButton>
+      <ToolButton
+        label="Show dimensions"
+        active={s.ui.layers.dimensions}
+        onClick={() => run(toggleLayer, { layer: 'dimensions' })}
+      >
+        <Icon d={icons.dims} />
+      </ToolButton>
+      {readOnly ? null : (
+        <>
+          <Divider />
+          <ToolButton
+            label="Snap to grid"
+            active={s.ui.snap.grid}
+            onClick={() => run(toggleSnap, { snap: 'grid' })}
+          >
+            <Icon d={icons.grid} />
+          </ToolButton>
+          <ToolButton
+            label="Snap to 45° and 90°"
+            active={s.ui.snap.angle}
+            onClick={() => run(toggleSnap, { snap: 'angle' })}
+          >
+            <Icon d={icons.angle} />
+          </ToolButton>
+          <ToolButton
+            label="Snap to corners"
+            active={s.ui.snap.points}
+            onClick={() => run(toggleSnap, { snap: 'points' })}
+          >
+            <Icon d={icons.point} />
+          </ToolButton>
+        </>
+      )}
+      <div className="ml-auto flex shrink-0 items-center gap-2 pl-2">
+        <FlagSummary />
+        {readOnly ? null : <SaveStatus />}
+      </div>
+    </div>
+  );
+}

@@ -1,45 +1,11 @@
-// Who may do what with quotes, payments, mail, team invitations, site files and build stages
-// (PRODUCT.md section 2: crew upload photos and mark stages; only owners and designers quote).
+// Enforces lib/validation/businessAccess.ts inside services.
 import type { SessionUser } from '@/lib/validation/access';
-import type { Role } from '@/models/constants';
+import { businessMatrix, canDo, type BusinessAction } from '@/lib/validation/businessAccess';
 import { Forbidden } from './errors';
 
-export type BusinessAction =
-  | 'quote:read'
-  | 'quote:write'
-  | 'settings:write'
-  | 'file:read'
-  | 'file:upload'
-  | 'file:delete'
-  | 'stage:read'
-  | 'stage:mark'
-  | 'mail:read'
-  | 'mail:send'
-  | 'team:invite';
-
-const matrix: Record<BusinessAction, { roles: readonly Role[]; message: string }> = {
-  'quote:read': { roles: ['owner', 'designer'], message: 'Only owners and designers see quotes' },
-  'quote:write': { roles: ['owner', 'designer'], message: 'Only owners and designers can quote' },
-  'settings:write': { roles: ['owner'], message: 'Only the owner can change quoting settings' },
-  'file:read': { roles: ['owner', 'designer', 'crew'], message: '' },
-  'file:upload': { roles: ['owner', 'designer', 'crew'], message: '' },
-  'file:delete': {
-    roles: ['owner', 'designer'],
-    message: 'Only owners and designers delete files',
-  },
-  'stage:read': { roles: ['owner', 'designer', 'crew'], message: '' },
-  'stage:mark': { roles: ['owner', 'designer', 'crew'], message: '' },
-  'mail:read': { roles: ['owner'], message: 'Only the owner reads the firm’s sent mail' },
-  'mail:send': { roles: ['owner', 'designer'], message: 'Only owners and designers send mail' },
-  'team:invite': { roles: ['owner'], message: 'Only the owner invites people to the team' },
-};
-
-/** True when the role may perform the action (the UI uses it to hide what it may not). */
-export function canDo(user: Pick<SessionUser, 'role'> | null | undefined, a: BusinessAction) {
-  return !!user && matrix[a].roles.includes(user.role);
-}
+export { canDo, type BusinessAction };
 
 /** Throws Forbidden (403) unless the user's role allows the action. */
 export function assertCanDo(user: SessionUser, a: BusinessAction): void {
-  if (!canDo(user, a)) throw new Forbidden(matrix[a].message || undefined);
+  if (!canDo(user, a)) throw new Forbidden(businessMatrix[a].message || undefined);
 }

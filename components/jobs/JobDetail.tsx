@@ -104,14 +104,15 @@ export function JobDetail({
         }
       />
 
-      <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)] lg:gap-6">
-        <div className="flex flex-col gap-4">
+      {/* One column on phones and portrait tablets (designs straight after the status); two side by side from lg. */}
+      <div className="flex flex-col gap-4 lg:grid lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)] lg:items-start lg:gap-6">
+        <div className="contents lg:flex lg:flex-col lg:gap-6">
           {editing ? (
-            <Card title="Edit details">
+            <Card title="Edit details" className="order-1">
               <JobDetailsForm job={data} onDone={() => setEditing(false)} />
             </Card>
           ) : (
-            <Card title="Site and client">
+            <Card title="Site and client" className="order-1">
               <dl className="grid gap-4 sm:grid-cols-2 lg:grid-cols-1 xl:grid-cols-2">
                 <div>
                   <dt className="text-xs font-semibold uppercase tracking-wide text-ash-600">
@@ -158,12 +159,12 @@ export function JobDetail({
             </Card>
           )}
 
-          <Card title="Status">
+          <Card title="Status" className="order-2">
             <JobStatusPicker job={data} canEdit={canEdit} />
           </Card>
 
           {!editing ? (
-            <Card title="Notes">
+            <Card title="Notes" className="order-4">
               {data.notes?.trim() ? (
                 <p className="whitespace-pre-line text-ash-800">{data.notes}</p>
               ) : (
@@ -178,10 +179,14 @@ export function JobDetail({
           ) : null}
         </div>
 
-        <div className="flex flex-col gap-4">
-          <DesignsPanel job={data} canEdit={canEdit} units={units} />
-          <SafetyNotice />
-          <p className="text-xs text-ash-600">Job created {formatDateTime(data.createdAt)}.</p>
+        <div className="contents lg:flex lg:flex-col lg:gap-6">
+          <div className="order-3">
+            <DesignsPanel job={data} canEdit={canEdit} units={units} />
+          </div>
+          <div className="order-5 flex flex-col gap-3">
+            <SafetyNotice />
+            <p className="text-xs text-ash-600">Job created {formatDateTime(data.createdAt)}.</p>
+          </div>
         </div>
       </div>
     </>

@@ -124,10 +124,13 @@ export function NewJobForm() {
       </fieldset>
 
       <fieldset className="grid gap-4 rounded-xl border border-ash-200 bg-white p-4 shadow-card sm:p-6">
-        <legend className="float-left mb-1 w-full text-base font-semibold text-ash-900">
-          Client
-        </legend>
-        <Field label="Client" optional error={errors.clientId} className="clear-both">
+        <legend className="sr-only">Client</legend>
+        <Field
+          label="Client"
+          optional
+          error={errors.clientId}
+          hint="Someone you have worked for before, or add the homeowner now."
+        >
           {(a11y) => (
             <Select
               {...a11y}

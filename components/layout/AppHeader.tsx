@@ -22,13 +22,13 @@ export function AppHeader({ user }: { user: ShellUser }) {
         >
           <NavLinks role={user.role} />
         </nav>
-        <div className="ml-auto flex items-center gap-3">
+        <div className="ml-auto flex min-w-0 items-center gap-2 sm:gap-3">
           <div
             data-testid="signed-in-user"
             className="flex min-w-0 flex-col items-end leading-tight"
             title={user.email}
           >
-            <span className="max-w-[11rem] truncate text-sm font-semibold sm:max-w-[16rem]">
+            <span className="max-w-[9rem] truncate text-sm font-semibold sm:max-w-[16rem]">
               {user.name}
             </span>
             <span className="text-xs font-medium text-larch-200">{roleLabels[user.role]}</span>

@@ -13,9 +13,10 @@ export function SignOutButton() {
         setBusy(true);
         void signOut({ callbackUrl: '/sign-in' });
       }}
-      className="flex min-h-11 items-center gap-2 rounded-lg border border-white/20 px-3 text-sm font-semibold text-white hover:bg-white/10 disabled:opacity-60"
+      title="Sign out"
+      className="flex min-h-11 min-w-11 items-center justify-center gap-2 rounded-lg border border-white/20 px-2.5 text-sm font-semibold text-white hover:bg-white/10 disabled:opacity-60 sm:px-3"
     >
-      <svg viewBox="0 0 20 20" className="size-4" aria-hidden="true">
+      <svg viewBox="0 0 20 20" className="size-5 sm:size-4" aria-hidden="true">
         <path
           d="M8 4H5a1 1 0 0 0-1 1v10a1 1 0 0 0 1 1h3M12 6l4 4-4 4M16 10H8"
           fill="none"
@@ -25,7 +26,7 @@ export function SignOutButton() {
           strokeLinejoin="round"
         />
       </svg>
-      Sign out
+      <span className="sr-only sm:not-sr-only">Sign out</span>
     </button>
   );
 }

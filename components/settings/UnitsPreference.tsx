@@ -82,13 +82,13 @@ export function UnitsPreference({ initial }: { initial: UnitSystem }) {
           })}
         </div>
       </fieldset>
-      <div className="mt-2 min-h-6 text-sm" aria-live="polite">
+      <div className="text-sm" aria-live="polite">
         {save.isPending ? (
-          <span className="inline-flex items-center gap-2 text-ash-600">
+          <span className="mt-3 inline-flex items-center gap-2 text-ash-600">
             <Spinner className="size-4" /> Saving…
           </span>
         ) : save.isError ? (
-          <span role="alert" className="font-medium text-clay-700">
+          <span role="alert" className="mt-3 block font-medium text-clay-700">
             Not saved: {errorMessage(save.error)}
           </span>
         ) : null}

@@ -44,7 +44,7 @@ export function ConfirmDialog({
         e.preventDefault();
         if (!busy) onCancel();
       }}
-      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-xl border border-ash-200 bg-white p-0 text-ash-900 shadow-lift"
+      className="m-auto w-[min(28rem,calc(100vw-2rem))] backdrop:bg-spruce-950/60 rounded-xl border border-ash-200 bg-white p-0 text-ash-900 shadow-lift"
     >
       <div className="p-5 sm:p-6">
         <h2 id={titleId} className="text-lg font-semibold">

@@ -14,7 +14,7 @@ export function Logo({
   const wright = tone === 'dark' ? 'text-larch-700' : 'text-larch-300';
   return (
     <span className={`inline-flex items-center gap-2.5 ${className}`}>
-      <LogoMark size={size} />
+      <LogoMark size={size} tone={tone} />
       <span className="leading-none tracking-tight" style={{ fontSize: size * 0.6 }}>
         <span className={`font-bold ${joist}`}>Joist</span>
         <span className={`font-medium ${wright}`}>wright</span>

@@ -2,6 +2,9 @@
 import { expect, test, type Page } from '@playwright/test';
 import { DEMO_PASSWORD, demoUsers, fillSignIn, signIn, signOut } from './helpers';
 
+// Each flow signs in more than once; give a busy machine room (the config's default is 60 s).
+test.describe.configure({ timeout: 180_000 });
+
 const uuid = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/;
 
 /** A title no other run has used, so searches find exactly this job. */

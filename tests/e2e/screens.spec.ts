@@ -10,7 +10,7 @@ const sizes = [
 const roles: DemoRole[] = ['owner', 'designer', 'crew'];
 const dir = 'tests/artifacts/screens';
 
-test.describe.configure({ mode: 'serial' });
+test.describe.configure({ mode: 'serial', timeout: 240_000 });
 
 for (const size of sizes) {
   for (const role of roles) {

@@ -17,7 +17,7 @@ export interface ExactResult {
  * turn) and fill that bar with a maximal set of the remaining pieces (one no other remaining piece
  * could join); recurse. Restricting to maximal bars loses nothing: moving a piece into a bar with
  * room never makes a plan dearer. Prunes with `remainingBound` against the best plan so far.
- * Deterministic: the budget counts nodes, not time.
+ * Deterministic: the budget counts work (nodes plus the steps spent listing bar fills), not time.
  */
 export function binCompletion(
   p: Problem,
@@ -56,12 +56,13 @@ export function binCompletion(
 
     let first = 0;
     while (rem[first] === 0) first++;
-    const cands = candidates(p, rem, avail, first, ENUM_LIMIT);
+    const listed = candidates(p, rem, avail, first, budget - nodes);
+    nodes += listed.steps;
+    const cands = listed.bins;
     if (!cands) {
       aborted = true;
       return;
     }
-    nodes += cands.length;
     for (const c of cands) {
       const ty = p.types[c.type];
       const nextCost = cost + ty.cost;
@@ -81,9 +82,6 @@ export function binCompletion(
   return { bins: best, score: bestScore, complete: !aborted, nodes };
 }
 
-/** Most steps one enumeration of bar fills may take before the search gives up proving. */
-const ENUM_LIMIT = 50_000;
-
 /** Maximal fills, holding piece `first`, of every bar type available; least waste first. Null when over `limit` steps. */
 function candidates(
   p: Problem,
@@ -91,7 +89,7 @@ function candidates(
   avail: number[],
   first: number,
   limit: number,
-): Bin[] | null {
+): { bins: Bin[] | null; steps: number } {
   const d = p.sizes.length;
   const out: Bin[] = [];
   let steps = 0;
@@ -130,7 +128,7 @@ function candidates(
       counts[i] = 0;
     };
     enumerate(first, p.sizes[first]);
-    if (steps > limit) return null;
+    if (steps > limit) return { bins: null, steps };
   }
   // Cheapest per unit used first, then fullest.
   out.sort((a, b) => {
@@ -139,5 +137,5 @@ function candidates(
     if (Math.abs(ra - rb) > 1e-12) return ra - rb;
     return b.used - a.used;
   });
-  return out;
+  return { bins: out, steps };
 }

@@ -111,9 +111,12 @@ export function fitDecreasing(p: Problem, best: boolean, offcutsFirst: boolean):
   const bins: Bin[] = [];
   for (let i = 0; i < d; i++) {
     const s = p.sizes[i];
+    // WARNING: first fit for equal pieces only moves forward (earlier bars only fill up), so the
+    // scan resumes where the last equal piece went; this keeps big decks linear, not quadratic.
+    let from = 0;
     for (let q = 0; q < p.demand[i]; q++) {
       let into = -1;
-      for (let b = 0; b < bins.length; b++) {
+      for (let b = best ? 0 : from; b < bins.length; b++) {
         const room = p.types[bins[b].type].cap - bins[b].used;
         if (room < s - EPS) continue;
         if (!best) {
@@ -129,6 +132,7 @@ export function fitDecreasing(p: Problem, best: boolean, offcutsFirst: boolean):
         bins.push({ type: t, counts: new Array<number>(d).fill(0), used: 0 });
         into = bins.length - 1;
       }
+      from = into;
       bins[into].counts[i]++;
       bins[into].used += s;
     }

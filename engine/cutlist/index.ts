@@ -4,6 +4,8 @@ import type { CutListResult, CutStock } from '../types';
 import { countLowerBound, isSingleStock, l2Bound, remainingBound } from './bounds';
 import { binCompletion } from './exact';
 import { fitDecreasing, greedyFill } from './heuristics';
+import { improveTail } from './improve';
+import { columnGeneration, type LpResult } from './lp';
 import { better, scoreOf, type Bin, type BinType, type Problem, type Score } from './model';
 
 const length = (label: string) =>
@@ -45,11 +47,17 @@ export type CutListInput = z.input<typeof cutListInputSchema>;
 
 /** Tuning for solveCutList; the defaults suit the live editor. */
 export interface CutListOptions {
-  /** Node budget for the exact search (deterministic; no clock in the engine). */
+  /** Work budget for the exact searches, in search steps (deterministic; no clock in the engine). */
   budget?: number;
+  /** Reuse the answer for an identical input (default true); the bench turns it off. */
+  cache?: boolean;
 }
 
-const DEFAULT_BUDGET = 20_000;
+const DEFAULT_BUDGET = 200_000;
+/** The LP bound is worked out when there are at most this many distinct piece lengths (its cost grows with their square). */
+const LP_MAX_LENGTHS = 60;
+/** Rough cap on the LP's arithmetic (pivots x knapsack table size), to keep it to milliseconds. */
+const LP_WORK = 30_000_000;
 const CACHE_SIZE = 64;
 const cache = new Map<string, CutListResult>();
 
@@ -71,13 +79,15 @@ export function solveCutList(input: CutListInput, options: CutListOptions = {}):
   const inp = parsed.data;
   const budget = options.budget ?? DEFAULT_BUDGET;
   const key = JSON.stringify([inp, budget]);
-  const hit = cache.get(key);
+  const useCache = options.cache !== false;
+  const hit = useCache ? cache.get(key) : undefined;
   if (hit) {
     cache.delete(key);
     cache.set(key, hit);
     return cloneResult(hit);
   }
   const result = solve(inp, budget);
+  if (!useCache) return result;
   cache.set(key, result);
   if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value as string);
   return cloneResult(result);
@@ -137,7 +147,6 @@ function solve(inp: ParsedInput, budget: number): CutListResult {
   if (p.lens.length === 0)
     return { count: 0, stock: [], lowerBound: 0, optimal: true, totalStockMm: 0, ...extra };
 
-  const lowerBound = countLowerBound(p);
   let floor: Score;
   if (isSingleStock(p)) {
     const n = l2Bound(p.sizes, p.demand, p.types[0].cap);
@@ -152,13 +161,47 @@ function solve(inp: ParsedInput, budget: number): CutListResult {
     );
   }
 
+  let { bins, score } = bestHeuristic(p, floor);
+  let lowerBound = countLowerBound(p);
+  if (better(floor, score) && isSingleStock(p) && p.sizes.length <= LP_MAX_LENGTHS) {
+    // The LP bound is usually the true optimum; its rounded solution is a strong plan too.
+    const m = p.sizes.length;
+    const maxIter = Math.min(4 * m + 20, Math.floor(LP_WORK / (p.types[0].cap * m)));
+    const lp = columnGeneration(p, maxIter, score.count);
+    if (lp.lowerBound > floor.count) {
+      floor = { cost: lp.lowerBound * p.types[0].cost, count: lp.lowerBound };
+      lowerBound = lp.lowerBound;
+    }
+    if (better(floor, score)) {
+      const r = lpRounding(p, lp, floor, budget);
+      if (better(r.score, score)) ({ bins, score } = r);
+    }
+  }
+  if (better(floor, score)) {
+    bins = improveTail(p, bins, floor, budget / 4);
+    score = scoreOf(p, bins);
+  }
+  let optimal = !better(floor, score);
+  if (!optimal) {
+    const ex = binCompletion(p, bins, score, floor, budget);
+    bins = ex.bins;
+    score = ex.score;
+    optimal = ex.complete || !better(floor, score);
+  }
+  return { ...toResult(p, bins), lowerBound, optimal, ...extra };
+}
+
+/** The best of the quick heuristics, stopping early at the floor. */
+function bestHeuristic(p: Problem, floor: Score): { bins: Bin[]; score: Score } {
   const hasOffcuts = p.types.some((t) => t.offcut);
+  const n = p.demand.reduce((a, b) => a + b, 0);
   const tries: (() => Bin[])[] = [
-    () => fitDecreasing(p, false, false),
-    () => fitDecreasing(p, true, false),
     () => greedyFill(p, true),
+    () => fitDecreasing(p, false, false),
     () => greedyFill(p, false),
   ];
+  // Best fit scans every bar for every piece: worth it on small lists only.
+  if (n <= 400) tries.push(() => fitDecreasing(p, true, false));
   if (hasOffcuts) {
     tries.push(() => fitDecreasing(p, false, true));
     tries.push(() => fitDecreasing(p, true, true));
@@ -174,14 +217,47 @@ function solve(inp: ParsedInput, budget: number): CutListResult {
     }
     if (!better(floor, score)) break; // already at the lower bound: proven optimal
   }
-  let optimal = !better(floor, score);
-  if (!optimal) {
-    const ex = binCompletion(p, bins, score, floor, budget);
-    bins = ex.bins;
-    score = ex.score;
-    optimal = ex.complete || !better(floor, score);
+  return { bins, score };
+}
+
+/**
+ * Round the LP down: cut each LP pattern as many whole times as it is used (never more pieces than
+ * wanted), then pack what is left with the heuristics and a short exact search.
+ */
+function lpRounding(
+  p: Problem,
+  lp: LpResult,
+  floor: Score,
+  budget: number,
+): { bins: Bin[]; score: Score } {
+  const d = p.sizes.length;
+  const rem = p.demand.slice();
+  const bins: Bin[] = [];
+  for (const pat of [...lp.patterns].sort((a, b) => b.x - a.x)) {
+    const times = Math.floor(pat.x + 1e-9);
+    for (let k = 0; k < times; k++) {
+      const counts = pat.counts.map((c, i) => Math.min(c, rem[i]));
+      let used = 0;
+      for (let i = 0; i < d; i++) {
+        used += counts[i] * p.sizes[i];
+        rem[i] -= counts[i];
+      }
+      if (used <= 0) break;
+      bins.push({ type: 0, counts, used });
+    }
   }
-  return { ...toResult(p, bins), lowerBound, optimal, ...extra };
+  const rest: Problem = { ...p, demand: rem };
+  let restBins: Bin[] = [];
+  if (rem.some((r) => r > 0)) {
+    const n = Math.max(0, floor.count - bins.length);
+    const restFloor: Score = { cost: n * p.types[0].cost, count: n };
+    const h = bestHeuristic(rest, restFloor);
+    restBins = h.bins;
+    if (better(restFloor, h.score))
+      restBins = binCompletion(rest, h.bins, h.score, restFloor, budget / 4).bins;
+  }
+  const all = bins.concat(restBins);
+  return { bins: all, score: scoreOf(p, all) };
 }
 
 function round3(x: number): number {

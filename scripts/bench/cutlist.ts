@@ -1,0 +1,129 @@
+// Bench section: the cut list on deck-sized and known-optimum instances (pieces, stock used, lower bound, time).
+import { solveCutList } from '../../engine/cutlist';
+import { deckLike, perfectFit, triplets, type Instance } from '../../engine/cutlist/instances';
+import { handDeck } from '../../engine/takeoff/handDeck';
+import { takeOff } from '../../engine/takeoff';
+
+/** One row of the cut list bench. */
+export interface CutListBenchRow {
+  name: string;
+  pieces: number;
+  lengths: number;
+  stockUsed: number;
+  lowerBound: number;
+  /** ceil(total length incl. kerf / stock): the simplest bound. */
+  simpleBound: number;
+  optimum?: number;
+  optimal: boolean;
+  /** Median CPU milliseconds over the runs (cache off), and the slowest. */
+  ms: number;
+  maxMs: number;
+}
+
+function cpuMs(f: () => void): number {
+  const t = process.cpuUsage();
+  f();
+  const d = process.cpuUsage(t);
+  return (d.user + d.system) / 1000;
+}
+
+function bench(inst: Instance, runs: number): CutListBenchRow {
+  const times: number[] = [];
+  let r = solveCutList(inst, { cache: false });
+  for (let k = 0; k < runs; k++)
+    times.push(cpuMs(() => (r = solveCutList(inst, { cache: false }))));
+  times.sort((a, b) => a - b);
+  const pieces = inst.pieces.reduce((a, p) => a + p.qty, 0);
+  const total = inst.pieces.reduce((a, p) => a + p.qty * (p.lengthMm + inst.kerfMm), 0);
+  return {
+    name: inst.name,
+    pieces,
+    lengths: inst.pieces.length,
+    stockUsed: r.count,
+    lowerBound: r.lowerBound,
+    simpleBound: Math.ceil(total / (inst.stockMm + inst.kerfMm) - 1e-9),
+    optimum: inst.optimum,
+    optimal: r.optimal,
+    ms: times[Math.floor(times.length / 2)],
+    maxMs: times[times.length - 1],
+  };
+}
+
+/** The instances the bench runs: the hand-built example deck, deck-like lists, perfect-fit and triplet sets. */
+export function benchInstances(): Instance[] {
+  const { plan, design } = handDeck();
+  const cut = takeOff(plan, design).cutList;
+  const fromCut = (name: string, stockMm: number, cuts: number[]): Instance => {
+    const m = new Map<number, number>();
+    for (const c of cuts) m.set(c, (m.get(c) ?? 0) + 1);
+    return {
+      name,
+      stockMm,
+      kerfMm: design.kerfMm,
+      pieces: [...m].map(([lengthMm, qty]) => ({ lengthMm, qty })),
+    };
+  };
+  return [
+    fromCut(
+      '6 x 4 m deck, joists',
+      design.joist.stockMm,
+      cut.joists.stock.flatMap((s) => s.cuts),
+    ),
+    fromCut(
+      '6 x 4 m deck, boards',
+      design.board.stockMm,
+      cut.boards.stock.flatMap((s) => s.cuts),
+    ),
+    deckLike(1, 'joists', 40, 12000),
+    deckLike(2, 'boards', 80, 12000),
+    deckLike(3, 'joists', 75, 20000),
+    deckLike(4, 'boards', 140, 30000),
+    perfectFit(1, 20, 4800, 3),
+    perfectFit(2, 50, 4800, 3),
+    perfectFit(3, 100, 3000, 3, 5),
+    triplets(1, 20),
+    triplets(2, 40),
+  ];
+}
+
+/** Runs the cut list bench, prints a table and returns its rows. */
+export function run(opts: { runs?: number; print?: boolean } = {}): CutListBenchRow[] {
+  const runs = opts.runs ?? 7;
+  const rows = benchInstances().map((i) => bench(i, runs));
+  if (opts.print !== false) {
+    console.log('\nCut list (CPU ms, median and worst of %d runs, cache off)', runs);
+    console.log(
+      [
+        'instance'.padEnd(26),
+        'pieces',
+        'lengths',
+        'stock',
+        'bound',
+        'ceil',
+        'optimum',
+        'proven',
+        'ms',
+        'max ms',
+      ].join('  '),
+    );
+    for (const r of rows)
+      console.log(
+        [
+          r.name.padEnd(26),
+          String(r.pieces).padStart(6),
+          String(r.lengths).padStart(7),
+          String(r.stockUsed).padStart(5),
+          String(r.lowerBound).padStart(5),
+          String(r.simpleBound).padStart(4),
+          String(r.optimum ?? '-').padStart(7),
+          (r.optimal ? 'yes' : 'no').padStart(6),
+          r.ms.toFixed(1).padStart(6),
+          r.maxMs.toFixed(1).padStart(6),
+        ].join('  '),
+      );
+  }
+  return rows;
+}
+
+// Run on its own: `npx tsx scripts/bench/cutlist.ts`.
+if (process.argv[1] && /bench[\\/]cutlist\.ts$/.test(process.argv[1])) run();

@@ -13,7 +13,7 @@ const engineBanned = [
   'next-auth',
 ];
 
-export default [
+const config = [
   ...nextVitals,
   ...nextTs,
   {
@@ -58,3 +58,5 @@ export default [
     rules: { '@typescript-eslint/no-require-imports': 'off' },
   },
 ];
+
+export default config;

@@ -99,9 +99,15 @@ export function handle<Args extends unknown[]>(
   };
 }
 
-/** Reads a JSON body; anything that is not JSON is a 400. */
+/** Largest JSON body accepted (a 200-corner design document is far below this). */
+export const MAX_BODY_BYTES = 1_000_000;
+
+/** Reads a JSON body; anything that is not JSON is a 400, anything huge a 413. */
 export async function readJson(req: Request): Promise<unknown> {
+  const declared = Number(req.headers.get('content-length') ?? 0);
+  if (declared > MAX_BODY_BYTES) throw new HttpError(413, 'The request body is too large');
   const text = await req.text();
+  if (text.length > MAX_BODY_BYTES) throw new HttpError(413, 'The request body is too large');
   if (!text.trim()) return {};
   try {
     return JSON.parse(text);

@@ -12,6 +12,8 @@ export default defineConfig({
           name: 'unit',
           include: ['{engine,canvas,components,lib,app,models}/**/*.test.{ts,tsx}'],
           environment: 'node',
+          // Command-line tests spawn tsx; a loaded 2-core machine needs more than the 5 s default.
+          testTimeout: 30_000,
         },
       },
       {

@@ -101,7 +101,8 @@ describe('governing criterion moves with the section', () => {
   });
 });
 
-describe('npm run span (engine/cli/span.ts)', () => {
+// Spawning tsx is slow on a busy machine: these two get a generous timeout (not a speed check).
+describe('npm run span (engine/cli/span.ts)', { timeout: 60_000 }, () => {
   const dir = path.resolve(__dirname, '../../.tmp/span-cli-test');
   mkdirSync(dir, { recursive: true });
   const run = (file: string) =>

@@ -42,7 +42,12 @@ export function improveTail(p: Problem, bins: Bin[], floor: Score, budget: numbe
       let best = taken;
       let bestScore = before;
       for (const h of [() => fitDecreasing(sub, true, false), () => greedyFill(sub, true)]) {
-        const b = h();
+        let b: Bin[];
+        try {
+          b = h();
+        } catch {
+          continue; // a greedy stranded a long piece; the bars as they were still stand
+        }
         const s = scoreOf(sub, b);
         if (better(s, bestScore)) {
           best = b;

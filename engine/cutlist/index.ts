@@ -121,20 +121,27 @@ export function buildProblem(inp: ParsedInput): { problem: Problem; tooLong: num
   const offs = (inp.offcuts ?? []).filter((o) => o >= minOff);
   for (const [o, n] of grouped(offs.map((v) => ({ v, n: 1 }))))
     types.push({ stockMm: o, cap: o + kerf, cost: 0, avail: n, offcut: true });
-  const longest = Math.max(...types.map((t) => t.stockMm));
+  // Pieces longer than every new stock length can only come from offcuts: match them longest to
+  // longest; those left over cannot be cut at all.
+  const longestStock = Math.max(...stockList);
+  const spare = offs.filter((o) => o > longestStock).sort((a, b) => b - a);
   const tooLong: number[] = [];
   const lens: number[] = [];
   const demand: number[] = [];
   for (const [l, n] of grouped(inp.pieces.map((pc) => ({ v: pc.lengthMm, n: pc.qty })))) {
-    if (l > longest) {
-      for (let k = 0; k < n; k++) tooLong.push(l);
-      continue;
+    let fit = 0;
+    if (l > longestStock)
+      while (fit < n && spare.length && spare[0] >= l) {
+        spare.shift();
+        fit++;
+      }
+    else fit = n;
+    for (let k = fit; k < n; k++) tooLong.push(l);
+    if (fit > 0) {
+      lens.push(l);
+      demand.push(fit);
     }
-    lens.push(l);
-    demand.push(n);
   }
-  // Pieces longer than every offcut but within stock must not count free offcut room they cannot use:
-  // the bounds stay valid (they only ever subtract available room) and the searches check fits.
   return {
     problem: { kerf, lens, sizes: lens.map((l) => l + kerf), demand, types },
     tooLong,
@@ -209,7 +216,12 @@ function bestHeuristic(p: Problem, floor: Score): { bins: Bin[]; score: Score } 
   let bins: Bin[] = [];
   let score: Score = { cost: Infinity, count: Infinity };
   for (const t of tries) {
-    const b = t();
+    let b: Bin[];
+    try {
+      b = t();
+    } catch {
+      continue; // a greedy can strand a long piece when offcuts are scarce; first fit never does
+    }
     const s = scoreOf(p, b);
     if (better(s, score)) {
       bins = b;

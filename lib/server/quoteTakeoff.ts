@@ -2,10 +2,11 @@
 import { parseDesign, planFrame } from '@/engine';
 import type { PricedProduct, PricedTakeOff } from '@/engine/takeoff/price';
 import { priceTakeOff } from '@/engine/takeoff/price';
+import { DEFAULT_WASTE_PCT } from '@/lib/pdf/requests';
 import type { Product } from '@/models';
 
-/** Allowance on counted items (clips, screws, membrane...); cut-list stock already carries its offcuts. Common practice. */
-export const QUOTE_WASTE_PCT = 5;
+/** The same waste allowance the materials list uses, so the quote and the order agree. */
+export const QUOTE_WASTE_PCT = DEFAULT_WASTE_PCT;
 
 /** The design's priced take-off and deck area, or undefined when the design cannot be laid out. */
 export function designTakeoff(

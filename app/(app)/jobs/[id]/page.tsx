@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { JobDetail } from '@/components/jobs/JobDetail';
+import { JobBusinessSections } from '@/components/quotes/JobBusinessSections';
 import { requireUser } from '@/components/layout/currentUser';
 import { canDeleteJobs, canEditJobs } from '@/components/layout/roles';
 import { idSchema } from '@/lib/validation/common';
@@ -12,11 +13,14 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
   if (!idSchema.safeParse(id).success) notFound();
   const user = await requireUser();
   return (
-    <JobDetail
-      id={id}
-      canEdit={canEditJobs(user.role)}
-      canDelete={canDeleteJobs(user.role)}
-      units={user.units}
-    />
+    <>
+      <JobDetail
+        id={id}
+        canEdit={canEditJobs(user.role)}
+        canDelete={canDeleteJobs(user.role)}
+        units={user.units}
+      />
+      <JobBusinessSections jobId={id} role={user.role} />
+    </>
   );
 }

@@ -19,10 +19,11 @@ export async function uploadFile(
   const form = new FormData();
   form.set('file', file);
   if (caption) form.set('caption', caption);
-  return fetchJson<JobFileView>(`/api/jobs/${jobId}/files`, {
-    method: 'POST',
-    body: form,
-  } as never);
+  // Not fetchJson: it sends JSON bodies only; the browser sets the multipart boundary itself.
+  const res = await fetch(`/api/jobs/${jobId}/files`, { method: 'POST', body: form });
+  const body = (await res.json().catch(() => ({}))) as JobFileView & { error?: string };
+  if (!res.ok) throw new ApiError(res.status, body.error ?? `Upload failed (${res.status})`);
+  return body;
 }
 
 export function JobFiles({ jobId }: { jobId: string }) {

@@ -253,8 +253,10 @@ describe('materialsCsv (RFC 4180)', () => {
         if (row[i] === '"') {
           i++;
           while (i < row.length) {
-            if (row[i] === '"' && row[i + 1] === '"') ((f += '"'), (i += 2));
-            else if (row[i] === '"') break;
+            if (row[i] === '"' && row[i + 1] === '"') {
+              f += '"';
+              i += 2;
+            } else if (row[i] === '"') break;
             else f += row[i++];
           }
           i++;

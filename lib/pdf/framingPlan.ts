@@ -23,7 +23,7 @@ import {
   geometryPoints,
   paperExtent,
   planChains,
-  planTouches,
+  planBoundsWithin,
   polygon,
 } from './planDrawing';
 import {
@@ -124,7 +124,10 @@ function partMargins(chains: Chain[]) {
 
 interface Part {
   label: string;
+  /** What the part shows: the plan's extent inside its tile. */
   window: Box;
+  /** The tile of the grid the part belongs to. */
+  tile: Box;
 }
 
 function splitIntoParts(plan: FramePlan, points: V2[], chains: Chain[], area: Box, scale: number) {
@@ -149,8 +152,10 @@ function splitIntoParts(plan: FramePlan, points: V2[], chains: Chain[], area: Bo
         y1: gy0 + H - (H * r) / ny,
         y0: gy0 + H - (H * (r + 1)) / ny,
       };
-      if (!planTouches(plan, window)) continue;
-      parts.push({ label: `${String.fromCharCode(65 + c)}${r + 1}`, window });
+      // Each part shows only the stretch of plan inside its tile, where it sits on the tile.
+      const drawn = planBoundsWithin(plan, window);
+      if (!drawn) continue;
+      parts.push({ label: `${String.fromCharCode(65 + c)}${r + 1}`, window: drawn, tile: window });
     }
   }
   const partW = W / nx / scale;
@@ -161,8 +166,8 @@ function splitIntoParts(plan: FramePlan, points: V2[], chains: Chain[], area: Bo
     ...p,
     view: {
       scale,
-      cx: x0 - p.window.x0 / scale,
-      cy: y0 + p.window.y1 / scale,
+      cx: x0 - p.tile.x0 / scale,
+      cy: y0 + p.tile.y1 / scale,
       window: p.window,
       part: true,
     } satisfies View,

@@ -3,7 +3,7 @@ import type { jsPDF } from 'jspdf';
 import type { DesignDocument } from '@/engine/schema';
 import type { FramePlan, Member } from '@/engine/types';
 import type { UnitSystem } from '@/lib/units';
-import { orderedSupportRows, sortedFlags } from './schedules';
+import { numberedChecks, orderedSupportRows } from './schedules';
 import { dimText, pdfText } from './text';
 
 export type V2 = [number, number];
@@ -569,8 +569,8 @@ export function drawFlagMarker(
   doc.setFont('helvetica', 'normal');
 }
 
-function segmentInBox(a: V2, b: V2, box: Box): boolean {
-  // Liang-Barsky: does segment ab touch the box?
+/** The part of segment ab inside the box (Liang-Barsky), or null when it misses. */
+function clipSegment(a: V2, b: V2, box: Box): [V2, V2] | null {
   let t0 = 0;
   let t1 = 1;
   const dx = b[0] - a[0];
@@ -583,23 +583,46 @@ function segmentInBox(a: V2, b: V2, box: Box): boolean {
   ];
   for (const [p, q] of checks) {
     if (p === 0) {
-      if (q < 0) return false;
+      if (q < 0) return null;
     } else {
       const r = q / p;
       if (p < 0) t0 = Math.max(t0, r);
       else t1 = Math.min(t1, r);
-      if (t0 > t1) return false;
+      if (t0 > t1) return null;
     }
   }
-  return true;
+  return [
+    [a[0] + dx * t0, a[1] + dy * t0],
+    [a[0] + dx * t1, a[1] + dy * t1],
+  ];
+}
+
+function planSegments(plan: FramePlan): [V2, V2][] {
+  const segs: [V2, V2][] = plan.members.map((m) => [m.a as V2, m.b as V2]);
+  const rings = [plan.outline, ...plan.steps.map((s) => s.outline)] as V2[][];
+  for (const ring of rings) ring.forEach((q, i) => segs.push([q, ring[(i + 1) % ring.length]]));
+  return segs;
 }
 
 /** Whether any of the plan's members, outline or steps falls inside a world box. */
 export function planTouches(plan: FramePlan, box: Box): boolean {
-  const segs: [V2, V2][] = plan.members.map((m) => [m.a as V2, m.b as V2]);
-  const rings = [plan.outline, ...plan.steps.map((s) => s.outline)] as V2[][];
-  for (const ring of rings) ring.forEach((q, i) => segs.push([q, ring[(i + 1) % ring.length]]));
-  return segs.some(([a, b]) => segmentInBox(a, b, box));
+  return planSegments(plan).some(([a, b]) => clipSegment(a, b, box) !== null);
+}
+
+/** The bounding box of what the plan draws inside a world box, or null when it draws nothing there. */
+export function planBoundsWithin(plan: FramePlan, box: Box): Box | null {
+  const out: Box = { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
+  for (const [a, b] of planSegments(plan)) {
+    const c = clipSegment(a, b, box);
+    if (!c) continue;
+    for (const q of c) {
+      out.x0 = Math.min(out.x0, q[0]);
+      out.y0 = Math.min(out.y0, q[1]);
+      out.x1 = Math.max(out.x1, q[0]);
+      out.y1 = Math.max(out.y1, q[1]);
+    }
+  }
+  return Number.isFinite(out.x0) ? out : null;
 }
 
 export interface DrawPlanOptions {
@@ -744,27 +767,93 @@ export function drawPlan(doc: jsPDF, o: DrawPlanOptions): void {
     ];
     const l1 = pdfText(`Step ${i + 1}: ${s.count} tread${s.count === 1 ? '' : 's'}`);
     const l2 = pdfText(`rise ${dimText(s.riseMm, units)}, going ${dimText(s.goingMm, units)}`);
-    doc.setFillColor(255, 255, 255);
+    const bw = Math.max(...pts.map((q) => q[0])) - Math.min(...pts.map((q) => q[0]));
+    const bh = Math.max(...pts.map((q) => q[1])) - Math.min(...pts.map((q) => q[1]));
     const w = Math.max(doc.getTextWidth(l1), doc.getTextWidth(l2)) + 1.6;
-    doc.rect(c[0] - w / 2, c[1] - 3.1, w, 5.4, 'F');
-    doc.text(l1, c[0] - doc.getTextWidth(l1) / 2, c[1] - 0.6);
-    doc.text(l2, c[0] - doc.getTextWidth(l2) / 2, c[1] + 1.8);
+    doc.setFillColor(255, 255, 255);
+    if (w <= bw && bh >= 6) {
+      doc.rect(c[0] - w / 2, c[1] - 3.1, w, 5.4, 'F');
+      doc.text(l1, c[0] - doc.getTextWidth(l1) / 2, c[1] - 0.6);
+      doc.text(l2, c[0] - doc.getTextWidth(l2) / 2, c[1] + 1.8);
+    } else {
+      // Too small on this sheet for the full label: a short mark; the notes give the rest.
+      const short = `S${i + 1}`;
+      const sw = doc.getTextWidth(short) + 1;
+      doc.rect(c[0] - sw / 2, c[1] - 1.6, sw, 2.6, 'F');
+      doc.text(short, c[0] - doc.getTextWidth(short) / 2, c[1] + 0.6);
+    }
   });
+  // Edge lengths where the outline is more than a square-on rectangle (the chains give those).
+  const ring = plan.outline as V2[];
+  const squareRect =
+    ring.length === 4 &&
+    ring.every((q, i) => {
+      const r = ring[(i + 1) % 4];
+      return Math.abs(q[0] - r[0]) < 0.5 || Math.abs(q[1] - r[1]) < 0.5;
+    });
+  if (!squareRect && ring.length >= 3) {
+    const ob = {
+      x0: Math.min(...ring.map((q) => q[0])),
+      x1: Math.max(...ring.map((q) => q[0])),
+      y0: Math.min(...ring.map((q) => q[1])),
+      y1: Math.max(...ring.map((q) => q[1])),
+    };
+    const ccw =
+      ring.reduce((a, q, i) => {
+        const r = ring[(i + 1) % ring.length];
+        return a + q[0] * r[1] - r[0] * q[1];
+      }, 0) > 0;
+    doc.setFont('helvetica', 'bold');
+    doc.setFontSize(style.dimFont);
+    doc.setTextColor(40, 40, 40);
+    ring.forEach((q, i) => {
+      const r = ring[(i + 1) % ring.length];
+      const l = Math.hypot(r[0] - q[0], r[1] - q[1]);
+      if (l < 1) return;
+      // An edge spanning the whole width or height is already on an overall chain.
+      const full =
+        (Math.abs(l - (ob.x1 - ob.x0)) < 1 && Math.abs(q[1] - r[1]) < 0.5) ||
+        (Math.abs(l - (ob.y1 - ob.y0)) < 1 && Math.abs(q[0] - r[0]) < 0.5);
+      if (full) return;
+      // A third of the way along, clear of the flag markers the checks put at edge midpoints.
+      const m: V2 = [q[0] + (r[0] - q[0]) * 0.33, q[1] + (r[1] - q[1]) * 0.33];
+      if (m[0] < win.x0 - 1 || m[0] > win.x1 + 1 || m[1] < win.y0 - 1 || m[1] > win.y1 + 1) return;
+      const outward: V2 = ccw
+        ? [(r[1] - q[1]) / l, -(r[0] - q[0]) / l]
+        : [-(r[1] - q[1]) / l, (r[0] - q[0]) / l];
+      const a = P(q);
+      const b = P(r);
+      const d = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
+      textAlong(
+        doc,
+        dimText(l, units),
+        P(m),
+        [(b[0] - a[0]) / d, (b[1] - a[1]) / d],
+        [outward[0], -outward[1]],
+        1.6,
+      );
+    });
+    doc.setTextColor(0);
+    doc.setFont('helvetica', 'normal');
+  }
+
   // Flag markers, numbered as in "Checks to resolve"; markers on one spot step sideways.
   const placed: V2[] = [];
-  sortedFlags(plan).forEach((f, i) => {
-    if (f.severity === 'info') return;
-    const inWin =
-      f.at[0] >= win.x0 - 1 &&
-      f.at[0] <= win.x1 + 1 &&
-      f.at[1] >= win.y0 - 1 &&
-      f.at[1] <= win.y1 + 1;
-    if (!inWin) return;
-    const c = P(f.at as V2);
-    while (placed.some((q) => Math.hypot(q[0] - c[0], q[1] - c[1]) < 3.6)) c[0] += 4;
-    placed.push([c[0], c[1]]);
-    drawFlagMarker(doc, c, i + 1, f.severity);
-  });
+  for (const { n, places } of numberedChecks(plan)) {
+    for (const f of places) {
+      if (f.severity === 'info') continue;
+      const inWin =
+        f.at[0] >= win.x0 - 1 &&
+        f.at[0] <= win.x1 + 1 &&
+        f.at[1] >= win.y0 - 1 &&
+        f.at[1] <= win.y1 + 1;
+      if (!inWin) continue;
+      const c = P(f.at as V2);
+      while (placed.some((q) => Math.hypot(q[0] - c[0], q[1] - c[1]) < 3.6)) c[0] += 4;
+      placed.push([c[0], c[1]]);
+      drawFlagMarker(doc, c, n, f.severity);
+    }
+  }
   if (v.part) doc.restoreGraphicsState();
 
   // Dimension chains.

@@ -5,6 +5,7 @@ import type {
   CutListResult,
   FramePlan,
   Member,
+  Flag,
   MemberRole,
   Severity,
   SupportRowPlan,
@@ -166,7 +167,7 @@ export function footingSchedule(
         ]);
         break;
       case 'beam':
-        rows.push([`Row ${i + 1}`, `Beam, ${at}`, len(lengthMm, units), '-', 'see beam supports']);
+        rows.push([`Row ${i + 1}`, `Beam on posts, ${at}`, len(lengthMm, units), '-', 'see Posts']);
         break;
       case 'wall':
         rows.push([
@@ -323,7 +324,7 @@ export function quantitiesTable(plan: FramePlan): Table {
   };
 }
 
-/** Flags, worst first, numbered as on the plan. */
+/** The flags that need the crew's attention (not the standing caution), worst first. */
 export function sortedFlags(plan: FramePlan): FramePlan['flags'] {
   return plan.flags
     .filter((f) => f.code !== 'caution')
@@ -332,16 +333,41 @@ export function sortedFlags(plan: FramePlan): FramePlan['flags'] {
     .map(({ f }) => f);
 }
 
+/** One numbered check: identical findings (same check, same words) share a number and a row. */
+export interface NumberedCheck {
+  n: number;
+  flag: Flag;
+  places: Flag[];
+}
+
+/** Flags folded into numbered checks; the plan's markers carry these numbers. */
+export function numberedChecks(plan: FramePlan): NumberedCheck[] {
+  const byKey = new Map<string, NumberedCheck>();
+  const out: NumberedCheck[] = [];
+  for (const f of sortedFlags(plan)) {
+    const key = `${f.code}|${f.severity}|${f.message}`;
+    const seen = byKey.get(key);
+    if (seen) seen.places.push(f);
+    else {
+      const c = { n: out.length + 1, flag: f, places: [f] };
+      byKey.set(key, c);
+      out.push(c);
+    }
+  }
+  return out;
+}
+
 /** The flags as a table (numbers match the markers on the plan). */
 export function flagsTable(plan: FramePlan, units: UnitSystem): Table {
-  const rows = sortedFlags(plan).map((f, i) => [
-    String(i + 1),
+  const rows = numberedChecks(plan).map(({ n, flag: f, places }) => [
+    String(n),
     f.severity === 'error' ? 'ERROR' : f.severity === 'warning' ? 'Warning' : 'Info',
     // The engine words its messages in mm; imperial readers also get the figures in their units.
     pdfText(f.message) +
       (units === 'imperial' && f.valueMm !== undefined && f.limitMm !== undefined
         ? ` (${len(f.valueMm, units)} against ${len(f.limitMm, units)})`
-        : ''),
+        : '') +
+      (places.length > 1 ? ` (${places.length} places)` : ''),
     pdfText(f.source ?? ''),
   ]);
   return {
@@ -349,8 +375,8 @@ export function flagsTable(plan: FramePlan, units: UnitSystem): Table {
     columns: [
       { label: '#', width: 0.4 },
       { label: 'Level', width: 0.9 },
-      { label: 'What', width: 4.5 },
-      { label: 'Source', width: 1.8 },
+      { label: 'What', width: 3.8 },
+      { label: 'Source', width: 2.6 },
     ],
     rows: rows.length ? rows : [['-', '-', 'No errors or warnings from the checks.', '']],
   };
@@ -370,6 +396,11 @@ export function planNotes(plan: FramePlan, design: DesignDocument, units: UnitSy
     `Joists at ${len(design.joistCentresMm, units)} centres; ${design.joist.widthMm} x ${design.joist.depthMm} mm; joins only over a support row.`,
     `Board gaps: ${len(design.board.gapMm, units)} side, ${len(design.board.endGapMm, units)} at butt joints; every butt joint over a pair of joists.`,
     'Pre-drill plastic joists for screws; a hidden clip at every board/joist crossing.',
+  );
+  plan.steps.forEach((st, i) =>
+    notes.push(
+      `Step ${i + 1} (S${i + 1} on the plan): ${st.count} tread${st.count === 1 ? '' : 's'} of ${st.treadBoards} boards, rise ${len(st.riseMm, units)}, going ${len(st.goingMm, units)}; tread tops ${st.levelsMm.map((l) => len(l, units)).join(', ')} above ground. Frame steps at ${len(design.stairCentresMm, units)} centres.`,
+    ),
   );
   return notes.map(pdfText);
 }

@@ -1,5 +1,6 @@
 // Sends signed-out visitors of app pages to /sign-in. API routes answer 401 JSON themselves, and
-// public pages (sign-in, health, client proposal links under /p/) stay open.
+// public pages (sign-in, health, client proposal links under /p/, team invitations under
+// /invite/) stay open.
 import { withAuth } from 'next-auth/middleware';
 
 export default withAuth({
@@ -9,6 +10,6 @@ export default withAuth({
 export const config = {
   matcher: [
     // Everything except: api routes, Next's assets, files with an extension, sign-in, and /p/ links.
-    '/((?!api/|_next/|sign-in|p/|favicon\\.ico|.*\\.[A-Za-z0-9]+$).*)',
+    '/((?!api/|_next/|sign-in|p/|invite/|favicon\\.ico|.*\\.[A-Za-z0-9]+$).*)',
   ],
 };

@@ -9,6 +9,8 @@ type Item = { href: string; label: string; roles: Role[] };
 const items: Item[] = [
   { href: '/jobs', label: 'Jobs', roles: ['owner', 'designer', 'crew'] },
   { href: '/catalogue', label: 'Catalogue', roles: ['owner'] },
+  { href: '/team', label: 'Team', roles: ['owner'] },
+  { href: '/inbox', label: 'Sent mail', roles: ['owner'] },
   { href: '/settings', label: 'Settings', roles: ['owner', 'designer', 'crew'] },
 ];
 

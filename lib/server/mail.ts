@@ -2,7 +2,7 @@
 // SMTP_URL (the local sink by default). Failures are retried with back-off and stay visible.
 import nodemailer, { type Transporter } from 'nodemailer';
 import { Op } from 'sequelize';
-import type { EmailKind, EmailMessage, StoredAttachment } from '@/models/business';
+import type { EmailKind, EmailMessage, EmailStatus, StoredAttachment } from '@/models/business';
 import { bdb } from './businessDb';
 import { NotFound } from './errors';
 import { serviceConfig } from './serviceConfig';
@@ -162,7 +162,7 @@ export interface OutboxItem {
   kind: EmailKind;
   to: string;
   subject: string;
-  status: EmailMessage['status'];
+  status: EmailStatus;
   attempts: number;
   lastError: string | null;
   nextAttemptAt: string;

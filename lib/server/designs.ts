@@ -1,5 +1,6 @@
 // Designs of the signed-in user's firm: create, read, save (optimistic concurrency), revisions.
 import type { Transaction } from 'sequelize';
+import { migrateDesign } from '@/engine/migrate';
 import { designDocumentSchema, exampleDesign, type DesignDocument } from '@/engine/schema';
 import type { SessionUser } from '@/lib/validation/access';
 import { idSchema } from '@/lib/validation/common';
@@ -29,11 +30,14 @@ export function designSummaryDto(d: Design): DesignSummary {
 }
 
 /**
- * The stored document with defaults for fields added since it was saved. A document that no
- * longer parses is returned as stored rather than hidden; the editor reports what is wrong.
+ * The stored document brought up to the current version (engine/migrate.ts) with defaults for
+ * fields added since it was saved. A document that no longer parses is returned as stored rather
+ * than hidden; the editor reports what is wrong with it.
  */
 function loadDocument(stored: unknown): DesignDocument {
-  const parsed = designDocumentSchema.safeParse(stored);
+  const migrated = migrateDesign(stored);
+  if (!migrated.ok) return stored as DesignDocument;
+  const parsed = designDocumentSchema.safeParse(migrated.doc);
   return parsed.success ? parsed.data : (stored as DesignDocument);
 }
 
@@ -149,8 +153,9 @@ export async function saveDesign(
             transaction,
           })
         : null;
+      const who = by?.id === actor.id ? 'you (in another window)' : (by?.name ?? 'someone else');
       throw new Conflict(
-        `This design was saved by ${by?.name ?? 'someone else'} since you opened it (version ${design.version}); reload it before saving`,
+        `This design was saved by ${who} since you opened it (now version ${design.version}); reload it before saving`,
         {
           current: {
             version: design.version,

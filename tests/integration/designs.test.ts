@@ -200,6 +200,28 @@ describe('save', () => {
   });
 });
 
+describe('load', () => {
+  it('fills defaults into a document stored before later optional fields existed', async () => {
+    const d = await made();
+    const bare = { ...exampleDesign() } as Record<string, unknown>;
+    for (const key of ['codeBasis', 'stairCentresMm', 'nogginRule', 'products', 'kerfMm']) {
+      delete bare[key];
+    }
+    await Design.update({ document: bare as never }, { where: { id: d.id } });
+    const res = await getDesign(await request('GET', '/x', { as: 'crew' }), params(d.id));
+    const loaded = designSchema.parse(await json(res));
+    expect(loaded.document).toEqual(exampleDesign());
+  });
+
+  it('tells the same person when their own other window saved first', async () => {
+    const d = await made();
+    await save(d.id, { version: 1, document: wider(d.document, 6300) });
+    const res = await save(d.id, { version: 1, document: wider(d.document, 6400) });
+    expect(res.status).toBe(409);
+    expect(((await json(res)) as { error: string }).error).toMatch(/saved by you/);
+  });
+});
+
 describe('revisions', () => {
   it('lists every saved version, newest first, with who saved it', async () => {
     const d = await made();

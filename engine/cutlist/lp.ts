@@ -127,6 +127,9 @@ function price(
   limit: number[],
   cap: number,
 ): { value: number; counts: number[] } | null {
+  // A short search usually settles it (few lengths, strong fractional bound); the table is the fallback.
+  const quick = knapsack(p.sizes, values, limit, cap, 5_000);
+  if (quick) return quick;
   const integral = p.sizes.every((s) => Number.isInteger(s)) && Number.isInteger(cap);
   if (integral && cap * p.sizes.length <= 2_000_000) {
     const r = knapsackDP(p.sizes, values, limit, cap);

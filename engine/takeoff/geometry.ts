@@ -62,3 +62,64 @@ export function segLength(a: Pt, b: Pt): number {
 export function outlineEdges(outline: Pt[]): [Pt, Pt][] {
   return outline.map((p, i) => [p, outline[(i + 1) % outline.length]] as [Pt, Pt]);
 }
+
+/**
+ * A uniform grid over segments, for finding the few segments near another one without testing
+ * them all (a 30 x 20 m deck has about a thousand board pieces and a thousand members).
+ */
+export class SegmentGrid {
+  private readonly cells = new Map<number, number[]>();
+  private stamp: Uint32Array;
+  private round = 0;
+
+  /** Files each segment under every cell its box (grown by `pad`) touches. */
+  constructor(
+    private readonly segs: { a: Pt; b: Pt }[],
+    private readonly cell = 600,
+    pad = 0,
+  ) {
+    this.stamp = new Uint32Array(segs.length);
+    segs.forEach((s, i) => {
+      this.eachCell(
+        Math.min(s.a[0], s.b[0]) - pad,
+        Math.min(s.a[1], s.b[1]) - pad,
+        Math.max(s.a[0], s.b[0]) + pad,
+        Math.max(s.a[1], s.b[1]) + pad,
+        (k) => {
+          const list = this.cells.get(k);
+          if (list) list.push(i);
+          else this.cells.set(k, [i]);
+        },
+      );
+    });
+  }
+
+  private eachCell(x0: number, y0: number, x1: number, y1: number, f: (key: number) => void) {
+    const c = this.cell;
+    const i0 = Math.floor(x0 / c);
+    const i1 = Math.floor(x1 / c);
+    const j0 = Math.floor(y0 / c);
+    const j1 = Math.floor(y1 / c);
+    for (let i = i0; i <= i1; i++) for (let j = j0; j <= j1; j++) f((i + 4096) * 8192 + (j + 4096));
+  }
+
+  /** Indices of segments filed in any cell the box touches, each once. */
+  near(x0: number, y0: number, x1: number, y1: number): number[] {
+    this.round++;
+    if (this.round === 0xffffffff) {
+      this.stamp.fill(0);
+      this.round = 1;
+    }
+    const out: number[] = [];
+    this.eachCell(x0, y0, x1, y1, (k) => {
+      const list = this.cells.get(k);
+      if (!list) return;
+      for (const i of list)
+        if (this.stamp[i] !== this.round) {
+          this.stamp[i] = this.round;
+          out.push(i);
+        }
+    });
+    return out;
+  }
+}

@@ -9,7 +9,14 @@ import type {
   Member,
   QuantityLine,
 } from '../types';
-import { crossingAlong, distToSegment, outlineEdges, segLength, sinBetween } from './geometry';
+import {
+  crossingAlong,
+  distToSegment,
+  outlineEdges,
+  SegmentGrid,
+  segLength,
+  sinBetween,
+} from './geometry';
 import { DEFAULT_RULES, type TakeOffRules } from './rules';
 
 export { DEFAULT_RULES, type TakeOffRules } from './rules';
@@ -153,20 +160,32 @@ function fixingMembers(plan: FramePlanCore): Member[] {
   return plan.members.filter((m) => m.kind === 'joist' || m.kind === 'rim');
 }
 
-/** Distances along member m (from m.a) where board pieces cross it. */
-function crossingsOn(m: Member, boards: BoardPiece[], design: DesignDocument): number[] {
+/** Board pieces filed in a grid, with the tolerances crossings are judged by. */
+interface BoardIndex {
+  boards: BoardPiece[];
+  grid: SegmentGrid;
+  tolBoard: number;
+  tolMember: number;
+}
+
+function indexBoards(boards: BoardPiece[], design: DesignDocument): BoardIndex {
   const tolBoard = design.joist.widthMm / 4; // a board end resting on the joist still bears on it
   const tolMember = design.board.widthMm / 2; // a board half over a joist end still gets fixed
-  const mnx = Math.min(m.a[0], m.b[0]) - tolMember;
-  const mxx = Math.max(m.a[0], m.b[0]) + tolMember;
-  const mny = Math.min(m.a[1], m.b[1]) - tolMember;
-  const mxy = Math.max(m.a[1], m.b[1]) + tolMember;
+  return { boards, grid: new SegmentGrid(boards, 600, tolBoard), tolBoard, tolMember };
+}
+
+/** Distances along member m (from m.a) where board pieces cross it. */
+function crossingsOn(m: Member, idx: BoardIndex): number[] {
+  const { tolBoard, tolMember } = idx;
   const at: number[] = [];
-  for (const bd of boards) {
-    if (Math.max(bd.a[0], bd.b[0]) + tolBoard < mnx || Math.min(bd.a[0], bd.b[0]) - tolBoard > mxx)
-      continue;
-    if (Math.max(bd.a[1], bd.b[1]) + tolBoard < mny || Math.min(bd.a[1], bd.b[1]) - tolBoard > mxy)
-      continue;
+  const near = idx.grid.near(
+    Math.min(m.a[0], m.b[0]) - tolMember,
+    Math.min(m.a[1], m.b[1]) - tolMember,
+    Math.max(m.a[0], m.b[0]) + tolMember,
+    Math.max(m.a[1], m.b[1]) + tolMember,
+  );
+  for (const i of near) {
+    const bd = idx.boards[i];
     if (sinBetween(bd.a, bd.b, m.a, m.b) < MIN_CROSSING_SIN) continue;
     const t = crossingAlong(bd.a, bd.b, m.a, m.b, tolBoard, tolMember);
     if (t !== null) at.push(t);
@@ -190,7 +209,7 @@ export function countClips(
   let starter = 0;
   let middle = 0;
   let crossings = 0;
-  for (const at of crossingsByLine(plan, field, design)) {
+  for (const at of crossingsByLine(plan, indexBoards(field, design))) {
     if (at.length === 0) continue;
     crossings += at.length;
     let runs = 1;
@@ -205,11 +224,7 @@ export function countClips(
  * Board crossings along each joist line (members sharing a lineId are one line, so a board over a
  * join is counted once), as distances along the line, sorted, duplicates within 1 mm removed.
  */
-function crossingsByLine(
-  plan: FramePlanCore,
-  boards: BoardPiece[],
-  design: DesignDocument,
-): number[][] {
+function crossingsByLine(plan: FramePlanCore, idx: BoardIndex): number[][] {
   const groups = new Map<string, Member[]>();
   for (const m of fixingMembers(plan)) {
     const k = m.lineId ?? `member:${m.id}`;
@@ -226,7 +241,7 @@ function crossingsByLine(
     const at: number[] = [];
     for (const m of members) {
       const mu = segLength(m.a, m.b) || 1;
-      for (const t of crossingsOn(m, boards, design)) {
+      for (const t of crossingsOn(m, idx)) {
         const x = m.a[0] + ((m.b[0] - m.a[0]) * t) / mu;
         const y = m.a[1] + ((m.b[1] - m.a[1]) * t) / mu;
         at.push((x - o[0]) * ux + (y - o[1]) * uy);
@@ -289,6 +304,9 @@ export function countScrews(
   const R: TakeOffRules = { ...DEFAULT_RULES, ...rules };
   const rims = plan.members.filter((m) => m.kind === 'rim');
   const reach = design.joist.widthMm + 2; // centreline to centreline where a joist end meets a rim
+  const rimGrid = new SegmentGrid(rims, 600, reach);
+  const rimsNear = (p: [number, number]) =>
+    rimGrid.near(p[0], p[1], p[0], p[1]).map((i) => rims[i]);
   let joistEnds = 0;
   let rimCorners = 0;
   let noggins = 0;
@@ -305,7 +323,7 @@ export function countScrews(
       case 'rim': {
         for (const end of [m.a, m.b])
           if (
-            rims.some(
+            rimsNear(end).some(
               (r) =>
                 r !== m &&
                 sinBetween(m.a, m.b, r.a, r.b) >= MIN_CROSSING_SIN &&
@@ -342,7 +360,7 @@ export function countScrews(
   const borderBoards = plan.boards.filter((b) => b.border);
   let borderFace = 0;
   if (borderBoards.length)
-    for (const at of crossingsByLine(plan, borderBoards, design))
+    for (const at of crossingsByLine(plan, indexBoards(borderBoards, design)))
       borderFace += at.length * R.borderScrewsPerCrossing;
   return { joistEnds, rimCorners, noggins, laminations, posts, borderFace };
 }

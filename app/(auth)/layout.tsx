@@ -4,7 +4,7 @@ import { Logo } from '@/components/ui/Logo';
 // Signed-out pages: the brand on a spruce panel beside (or, on a phone, above) the form.
 export default function AuthLayout({ children }: { children: ReactNode }) {
   return (
-    <div className="grid min-h-dvh grid-rows-[auto_1fr] lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)] lg:grid-rows-1">
+    <div className="grid min-h-dvh grid-cols-1 grid-rows-[auto_1fr] lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)] lg:grid-rows-1">
       <section className="relative overflow-hidden bg-spruce-800 px-6 py-6 text-white sm:px-10 lg:py-12">
         <BoardPattern />
         <div className="relative flex h-full flex-col gap-6 lg:justify-between">

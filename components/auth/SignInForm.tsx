@@ -1,12 +1,12 @@
 'use client';
 // Email and password sign-in, with one-tap demo sign-ins on demo installs.
 import { signIn } from 'next-auth/react';
-import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Alert } from '@/components/ui/Alert';
 import { Button } from '@/components/ui/Button';
 import { Field } from '@/components/ui/Field';
 import { Input } from '@/components/ui/Input';
+import { Spinner } from '@/components/ui/Spinner';
 import { roleLabels } from '@/components/layout/roles';
 import { signInSchema } from '@/lib/validation/auth';
 import { DEMO_FIRM, DEMO_PASSWORD, demoAccounts } from './demoAccounts';
@@ -32,7 +32,6 @@ export function SignInForm({
   initialError?: string;
   showDemo: boolean;
 }) {
-  const router = useRouter();
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const [fieldErrors, setFieldErrors] = useState<FieldErrors>({});
@@ -49,8 +48,8 @@ export function SignInForm({
         setBusy(null);
         return;
       }
-      router.replace(callbackUrl);
-      router.refresh();
+      // A full load: the server renders the shell with the new session cookie, and nothing stale remains.
+      window.location.assign(callbackUrl);
     } catch {
       setError('Could not reach the server. Check the connection and try again.');
       setBusy(null);
@@ -157,11 +156,28 @@ export function SignInForm({
                     </span>
                     <span className="block truncate text-sm text-ash-600">{acct.blurb}</span>
                   </span>
-                  <span className="text-sm font-semibold text-spruce-700">
+                  <span className="hidden shrink-0 text-sm font-semibold text-spruce-700 sm:inline">
                     {busy === acct.email
                       ? 'Signing in…'
                       : `Sign in as ${roleLabels[acct.role].toLowerCase()}`}
                   </span>
+                  {busy === acct.email ? (
+                    <Spinner className="size-5 shrink-0 text-spruce-600 sm:hidden" />
+                  ) : null}
+                  <svg
+                    viewBox="0 0 20 20"
+                    className={`size-5 shrink-0 text-spruce-600 sm:hidden ${busy === acct.email ? 'hidden' : ''}`}
+                    aria-hidden="true"
+                  >
+                    <path
+                      d="M7.5 4.5 13 10l-5.5 5.5"
+                      fill="none"
+                      stroke="currentColor"
+                      strokeWidth="2"
+                      strokeLinecap="round"
+                      strokeLinejoin="round"
+                    />
+                  </svg>
                 </button>
               </li>
             ))}

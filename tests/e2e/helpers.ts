@@ -28,7 +28,9 @@ export async function signIn(page: Page, role: DemoRole, next?: string): Promise
   const target = next ? `/sign-in?callbackUrl=${encodeURIComponent(next)}` : '/sign-in';
   await page.goto(target);
   await fillSignIn(page, demoUsers[role].email, DEMO_PASSWORD);
-  await expect(page.getByTestId('signed-in-user')).toContainText(demoUsers[role].name);
+  await expect(page.getByTestId('signed-in-user')).toContainText(demoUsers[role].name, {
+    timeout: 30_000,
+  });
   if (next) await page.waitForURL((url) => url.pathname === next.split('?')[0]);
 }
 

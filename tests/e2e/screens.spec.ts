@@ -39,6 +39,12 @@ for (const size of sizes) {
       await expect(page.getByRole('table', { name: /People in the firm/ })).toBeVisible();
       await shot('settings');
 
+      if (role === 'crew') {
+        await page.goto('/jobs/new');
+        await expect(page).toHaveURL(/\/forbidden$/);
+        await shot('forbidden');
+      }
+
       if (role === 'owner' && size.name === 'tablet') {
         await page.goto('/jobs/new');
         await page.getByRole('button', { name: 'Create job' }).click();

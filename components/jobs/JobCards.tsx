@@ -1,6 +1,7 @@
 // The jobs as stacked cards for phones, where a table would not fit.
 import Link from 'next/link';
 import { formatRelative } from '@/components/ui/formatDate';
+import { JobProgressNote } from '@/components/stages/JobProgressNote';
 import { StatusBadge } from './StatusBadge';
 import type { JobSummary } from './types';
 
@@ -17,6 +18,7 @@ export function JobCards({ jobs }: { jobs: JobSummary[] }) {
               <span className="font-semibold text-spruce-800">{job.title}</span>
               <StatusBadge status={job.status} />
             </div>
+            <JobProgressNote jobId={job.id} ids={jobs.map((j) => j.id)} />
             <p className="mt-1 text-sm text-ash-700">{job.siteAddress}</p>
             <p className="mt-2 flex flex-wrap gap-x-3 text-xs text-ash-600">
               <span>{job.client?.name ?? 'No client yet'}</span>

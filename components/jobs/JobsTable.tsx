@@ -4,6 +4,7 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { SortableHeader } from '@/components/ui/SortableHeader';
 import { formatDateTime, formatRelative } from '@/components/ui/formatDate';
+import { JobProgressNote } from '@/components/stages/JobProgressNote';
 import { StatusBadge } from './StatusBadge';
 import type { JobSortKey, JobSummary, SortDir } from './types';
 
@@ -84,6 +85,7 @@ export function JobsTable({
               </td>
               <td className="px-3 py-3">
                 <StatusBadge status={job.status} />
+                <JobProgressNote jobId={job.id} ids={jobs.map((j) => j.id)} />
               </td>
               <td className="hidden px-3 py-3 text-right tabular-nums text-ash-800 lg:table-cell">
                 {job.designCount}

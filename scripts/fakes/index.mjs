@@ -2,6 +2,7 @@
 // Ports come from FAKES_PORT_BASE (default 4710: SMTP, mail API, Stripe, S3 on base..base+3), or
 // one by one from FAKE_SMTP_PORT / FAKE_MAIL_API_PORT / FAKE_STRIPE_PORT / FAKE_S3_PORT. Data lives
 // in FAKES_DATA_DIR (default .data/fakes). Importable: startFakes() is what the tests call.
+import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import {
@@ -60,9 +61,12 @@ if (process.argv[1] === fileURLToPath(import.meta.url)) {
     stripe: Number(process.env.FAKE_STRIPE_PORT || base.stripe),
     s3: Number(process.env.FAKE_S3_PORT || base.s3),
   };
+  const dataDir = path.resolve(root, process.env.FAKES_DATA_DIR || '.data/fakes');
+  // FAKES_FRESH=1 (end-to-end runs) starts from empty mail, payments and storage.
+  if (process.env.FAKES_FRESH === '1') fs.rmSync(dataDir, { recursive: true, force: true });
   const fakes = await startFakes({
     ports,
-    dataDir: path.resolve(root, process.env.FAKES_DATA_DIR || '.data/fakes'),
+    dataDir,
     webhookSecret: process.env.STRIPE_WEBHOOK_SECRET || FAKE_STRIPE_WEBHOOK_SECRET,
     stripeWebhookUrl: process.env.FAKE_STRIPE_WEBHOOK_URL || undefined,
   });

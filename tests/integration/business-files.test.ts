@@ -6,6 +6,7 @@ import { GET as getJob } from '@/app/api/jobs/[id]/route';
 import { GET as listFiles, POST as upload } from '@/app/api/jobs/[id]/files/route';
 import { DELETE as deleteFile, GET as getFile } from '@/app/api/jobs/[id]/files/[fileId]/route';
 import { GET as listStages, POST as markStage } from '@/app/api/jobs/[id]/stages/route';
+import { GET as progress } from '@/app/api/jobs/progress/route';
 import type { JobFileView } from '@/lib/server/files';
 import type { StageView } from '@/lib/server/stages';
 import { json, params, sessionCookie, type Who } from './helpers';
@@ -163,5 +164,24 @@ describe('site photos', () => {
       params(jobId),
     );
     expect(other.status).toBe(404);
+  });
+
+  it('the job list learns the furthest stage; another firm learns nothing', async () => {
+    const mine = await json<Record<string, { stage: { label: string } | null }>>(
+      await progress(
+        new Request(`http://localhost/api/jobs/progress?ids=${jobId}`, {
+          headers: { cookie: await sessionCookie('crew') },
+        }),
+      ),
+    );
+    expect(mine[jobId].stage?.label).toBe('Frame');
+    const theirs = await json(
+      await progress(
+        new Request(`http://localhost/api/jobs/progress?ids=${jobId}`, {
+          headers: { cookie: await sessionCookie('otherOwner') },
+        }),
+      ),
+    );
+    expect(theirs).toEqual({});
   });
 });

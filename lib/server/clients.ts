@@ -1,5 +1,5 @@
 // Clients of the signed-in user's firm.
-import type { Transaction } from 'sequelize';
+import { fn, col, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/validation/access';
 import { clientCreateSchema, type ClientCreate, type ClientDto } from '@/lib/validation/client';
 import { idSchema } from '@/lib/validation/common';
@@ -27,8 +27,9 @@ export async function listClients(actor: SessionUser): Promise<ClientDto[]> {
   db();
   const clients = await Client.findAll({
     where: { firmId: actor.firmId },
+    // A to Z regardless of capitals (the database collation is byte order).
     order: [
-      ['name', 'ASC'],
+      [fn('lower', col('name')), 'ASC'],
       ['id', 'ASC'],
     ],
   });

@@ -226,8 +226,12 @@ describe('firm isolation', () => {
     const mine = await list('owner', 'pageSize=100');
     expect(mine.items.map((j) => j.id)).not.toContain(OTHER_FIRM_JOB);
     const theirs = await list('otherOwner', 'pageSize=100');
-    expect(theirs.items.map((j) => j.id)).toEqual([OTHER_FIRM_JOB]);
-    expect(theirs.total).toBe(1);
+    expect(theirs.items.map((j) => j.id)).toContain(OTHER_FIRM_JOB);
+    const rows = await Job.findAll({ where: { id: theirs.items.map((j) => j.id) } });
+    expect(new Set(rows.map((j) => j.firmId))).toEqual(
+      new Set([(await demoUser('otherOwner')).firmId]),
+    );
+    expect(theirs.total).toBe(await countJobs((await demoUser('otherOwner')).firmId));
   });
 });
 

@@ -48,10 +48,13 @@ export function takeOff(
   return { quantities: lines.filter((l) => l.qty > 0), cutList };
 }
 
-/** True when border boards are a different product from field boards and so need stock of their own. */
+/**
+ * True unless the design chooses the same product for border and field boards: border boards are
+ * usually a board of their own (a square edge, another colour), bought and cut on their own.
+ */
 function separateBorder(design: DesignDocument): boolean {
   const { board, borderBoard } = design.products;
-  return borderBoard !== undefined && borderBoard !== board;
+  return !(board !== undefined && borderBoard === board);
 }
 
 /** Pieces grouped by length, for the cut list solver. */
@@ -67,8 +70,8 @@ function piecesOf(lengths: number[]): { lengthMm: number; qty: number }[] {
 /**
  * The cut lists. Joist-section members (joists, rims, noggins, every ply) are packed together, so
  * noggins come out of what is left of joist bars: the same as cutting noggins from joist offcuts,
- * and never dearer than doing it in two passes. Border boards share the field boards' stock unless
- * they are a different product.
+ * and never dearer than doing it in two passes. Border boards get a cut list of their own unless
+ * the design chooses one product for both (see separateBorder).
  */
 function cutLists(plan: FramePlanCore, design: DesignDocument): CutList {
   const common = { kerfMm: design.kerfMm, minOffcutMm: design.minOffcutMm };
@@ -88,8 +91,8 @@ function cutLists(plan: FramePlanCore, design: DesignDocument): CutList {
     pieces: piecesOf(field),
   });
   const out: CutList = { joists, boards };
-  if (apart) {
-    const border = plan.boards.filter((b) => b.border).map((b) => b.lengthMm);
+  const border = plan.boards.filter((b) => b.border).map((b) => b.lengthMm);
+  if (apart && border.length) {
     out.borderBoards = solveCutList({
       ...common,
       stockMm: design.board.stockMm,
@@ -175,7 +178,7 @@ function indexBoards(boards: BoardPiece[], design: DesignDocument): BoardIndex {
 }
 
 /** Distances along member m (from m.a) where board pieces cross it. */
-function crossingsOn(m: Member, idx: BoardIndex): number[] {
+export function crossingsOn(m: Member, idx: BoardIndex): number[] {
   const { tolBoard, tolMember } = idx;
   const at: number[] = [];
   const near = idx.grid.near(
@@ -401,10 +404,12 @@ function groundLines(plan: FramePlanCore, design: DesignDocument, R: TakeOffRule
   const posts = plan.members.filter((m) => m.kind === 'post');
   let rowBlocks = 0;
   let stripM3 = 0;
+  const perRow: string[] = [];
   const bedW = R.blockWidthMm + 2 * R.bedMarginMm;
   for (const r of rows) {
     const n = Math.max(1, Math.ceil(segLength(r.a, r.b) / R.blockLengthMm - 1e-9));
     rowBlocks += n;
+    perRow.push(`${'id' in r ? r.id : 'row'} ${n}`);
     stripM3 += ((n * R.blockLengthMm + 2 * R.bedMarginMm) * bedW * R.bedMm) / 1e9;
   }
   const padM3 = (pads.length * (R.blockLengthMm + 2 * R.bedMarginMm) * bedW * R.bedMm) / 1e9;
@@ -421,7 +426,7 @@ function groundLines(plan: FramePlanCore, design: DesignDocument, R: TakeOffRule
     unit: 'each',
     qty: rowBlocks + pads.length,
     product: 'block',
-    basis: `${rows.length} support row(s) of blocks laid end to end (${rowBlocks}, each row's length / ${R.blockLengthMm} mm rounded up) and one block per pad (${pads.length}) (common practice).`,
+    basis: `Blocks laid end to end along each support row, its length / ${R.blockLengthMm} mm rounded up (${perRow.join(', ') || 'no rows'}: ${rowBlocks}), and one block per pad (${pads.length}) (common practice).`,
   });
   lines.push({
     key: 'concrete',

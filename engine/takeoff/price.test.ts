@@ -168,6 +168,21 @@ describe('priceTakeOff', () => {
     expect(r.lines.map((l) => l.productId)).toEqual(['c1', 'c2', 'bb']);
     const r2 = priceTakeOff(lines, catalogue, { wastePct: 0, choices: { clip: 'c2', board: 'b' } });
     expect(r2.lines[2].productId).toBe('b');
+    // A catalogue board marked as a border board serves border boards when none is chosen.
+    const marked = catalogue.map((c) =>
+      c.id === 'bb' ? { ...c, dimensions: { border: true } } : c,
+    );
+    const r3 = priceTakeOff(lines, marked, { wastePct: 0, choices: { clip: 'c2' } });
+    expect(r3.lines[2].productId).toBe('bb');
+    const r4 = priceTakeOff(
+      [q({ key: 'b', unit: 'length', qty: 1, stockMm: 4800, product: 'board' })],
+      marked,
+      {
+        wastePct: 0,
+        choices: {},
+      },
+    );
+    expect(r4.lines[0].productId).toBe('b');
   });
 
   it('adds the waste allowance to everything but cut-list stock lengths, unless asked', () => {

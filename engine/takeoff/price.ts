@@ -60,18 +60,26 @@ function productFor(
 ): PricedProduct | string {
   if (!line.product) return 'no product for this line';
   const key = line.product;
-  const chosen =
-    (choices as Record<string, string | undefined>)[key] ??
-    (FALLBACK_CHOICE[key]
-      ? (choices as Record<string, string | undefined>)[FALLBACK_CHOICE[key]]
-      : undefined);
+  const pick = (k: string) => (choices as Record<string, string | undefined>)[k];
   const kind = KIND_OF[key] ?? key;
+  let chosen = pick(key);
   let p: PricedProduct | undefined;
-  if (chosen) {
+  // Border boards: the chosen border board, else the catalogue's one board marked border, else the field board.
+  if (!chosen && key === 'borderBoard') {
+    const marked = catalogue.filter((c) => c.kind === 'board' && c.dimensions?.border === true);
+    if (marked.length === 1) p = marked[0];
+    else chosen = pick(FALLBACK_CHOICE[key]);
+  }
+  if (!p && chosen) {
     p = catalogue.find((c) => c.id === chosen);
     if (!p) return `chosen ${key} product is not in the catalogue`;
-  } else {
-    const ofKind = catalogue.filter((c) => c.kind === kind);
+  } else if (!p) {
+    let ofKind = catalogue.filter((c) => c.kind === kind);
+    // Field boards: a board marked as a border board is not a candidate when others exist.
+    if (key === 'board' && ofKind.length > 1) {
+      const plain = ofKind.filter((c) => c.dimensions?.border !== true);
+      if (plain.length > 0) ofKind = plain;
+    }
     if (ofKind.length === 1) p = ofKind[0];
     else if (ofKind.length === 0) return `no ${kind} product in the catalogue`;
   }
@@ -158,7 +166,7 @@ function buyQuantity(
 
 /**
  * Prices a take-off from the catalogue. Each line takes the design's chosen product, or the only
- * catalogue product of its kind; a line that cannot be priced keeps `unpriced` with the reason and
+ * catalogue product of its kind (boards: a product marked `dimensions.border` serves border boards); a line that cannot be priced keeps `unpriced` with the reason and
  * adds nothing (it is never priced at zero). The waste allowance (`wastePct` of the line amount)
  * applies to every line except stock lengths from the cut list, which already carry their offcuts
  * (set `wasteOnCutList` to include them). Amounts are rounded to the penny line by line.

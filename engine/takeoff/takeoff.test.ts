@@ -62,6 +62,7 @@ describe('takeOff on the hand-built 6 x 4 m deck', () => {
 
   it('counts blocks row by row: ceil(6000 / 440) = 14 per row, four rows (common practice, 440 mm block)', () => {
     expect(line(quantities, 'blocks').qty).toBe(4 * 14);
+    expect(line(quantities, 'blocks').basis).toContain('s0 14, s1 14, s2 14, s3 14');
   });
 
   it('works out concrete for block strips: 100 mm bed, 50 mm past the block (common practice)', () => {
@@ -100,9 +101,18 @@ describe('takeOff variants', () => {
     expect(s.borderFace).toBe(18 * 2 * DEFAULT_RULES.borderScrewsPerCrossing);
   });
 
-  it('packs border boards apart when they are a different product', () => {
+  it('packs border boards together with the field boards only when the design chooses one product for both', () => {
     const { plan, design } = handDeck({ borderCourse: true });
-    design.products = { board: 'b1', borderBoard: 'b2' };
+    design.products = { board: 'b1', borderBoard: 'b1' };
+    const { cutList, quantities } = takeOff(plan, design);
+    expect(cutList.borderBoards).toBeUndefined();
+    expect(cutList.boards.stock.flatMap((s) => s.cuts).filter((l) => l === 3000)).toHaveLength(4);
+    expect(quantities.some((q) => q.key.startsWith('border-boards'))).toBe(false);
+  });
+
+  it('packs border boards apart otherwise (usually another product)', () => {
+    const { plan, design } = handDeck({ borderCourse: true });
+    design.products = { board: 'b1' };
     const { cutList, quantities } = takeOff(plan, design);
     expect(cutList.borderBoards?.stock.flatMap((s) => s.cuts)).toEqual([3000, 3000, 3000, 3000]);
     expect(line(quantities, 'border-boards-4800').qty).toBe(4);

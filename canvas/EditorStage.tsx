@@ -29,11 +29,19 @@ export default function EditorStage({ bottomInset = 0 }: { bottomInset?: number 
   const machine = useMemo(() => createToolMachine(store), [store]);
   useEffect(() => () => machine.dispose(), [machine]);
 
-  // Size: follow the container; fit the deck the first time we know our size.
+  // Size: follow the container; fit the deck the first time we know our size, and again when the
+  // first frame plan arrives (steps stick out of the outline) unless the user has moved the view.
   useEffect(() => {
     const el = wrap.current;
     if (!el) return;
     let first = true;
+    let autoView: unknown = null;
+    const unsub = store.subscribe((s, prev) => {
+      if (s.plan.plan && !prev.plan.plan && s.ui.view === autoView) {
+        autoView = fittedView(s);
+        s.setUi({ view: autoView as typeof s.ui.view });
+      }
+    });
     const ro = new ResizeObserver(() => {
       const r = el.getBoundingClientRect();
       const next = {
@@ -45,11 +53,15 @@ export default function EditorStage({ bottomInset = 0 }: { bottomInset?: number 
       s.setUi({ viewport: next });
       if (first) {
         first = false;
-        s.setUi({ view: fittedView(store.getState()) });
+        autoView = fittedView(store.getState());
+        s.setUi({ view: autoView as typeof s.ui.view });
       }
     });
     ro.observe(el);
-    return () => ro.disconnect();
+    return () => {
+      ro.disconnect();
+      unsub();
+    };
   }, [store]);
 
   // Pointers: one finger drives the tool; two fingers pinch-zoom and pan (and cancel the tool's gesture).

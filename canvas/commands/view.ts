@@ -9,7 +9,12 @@ export function fittedView(s: EditorData) {
   const pts = [...s.doc.outline, ...s.ui.drawing];
   for (const st of s.plan.plan?.steps ?? []) pts.push(...st.outline);
   const b = boundsOf(pts) ?? { minX: -1000, minY: -1000, maxX: 1000, maxY: 1000 };
-  return fitView(b, s.ui.viewport, Math.min(64, Math.max(24, s.ui.viewport.width * 0.06)));
+  // Room around the deck for the side labels and dimension chains.
+  const margin = Math.min(
+    88,
+    Math.max(40, Math.min(s.ui.viewport.width, s.ui.viewport.height) * 0.11),
+  );
+  return fitView(b, s.ui.viewport, margin);
 }
 
 export const fitToDeck = defineCommand({

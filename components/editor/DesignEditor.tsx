@@ -13,6 +13,8 @@ import { STANDING_CAUTION } from '@/engine/codes';
 import type { UnitSystem } from '@/lib/units';
 import { ConflictDialog } from './ConflictDialog';
 import { DraftBanner } from './DraftBanner';
+import { FlagSummary } from './FlagSummary';
+import { SaveStatus } from './SaveStatus';
 import { SidePanel } from './SidePanel';
 import { Toolbar } from './Toolbar';
 
@@ -41,6 +43,8 @@ export function DesignEditor(props: EditorProps) {
             units: props.units,
           },
           doc: props.design.document,
+          // Crew open the flags first; designers the frame inputs.
+          ui: { panel: props.readOnly ? 'flags' : 'inputs' },
           version: props.design.version,
           planner: planner.current,
         };
@@ -57,7 +61,8 @@ function EditorBody() {
   const planMs = useEditor((s) => s.plan.ms);
   const root = useRef<HTMLDivElement>(null);
   const [height, setHeight] = useState<number | null>(null);
-  const [collapsed, setCollapsed] = useState(false);
+  // Phones are for looking: the plan gets the screen, the panel opens from its tabs.
+  const [collapsed, setCollapsed] = useState(() => window.innerWidth < 640);
   // Unsaved work left on this device (the editor only ever renders in the browser).
   const [draft, setDraft] = useState<Draft | null>(() => {
     const s = store.getState();
@@ -117,6 +122,8 @@ function EditorBody() {
         >
           {meta.name}
         </h1>
+        <FlagSummary />
+        {meta.readOnly ? null : <SaveStatus />}
       </div>
       <Toolbar />
       {draft ? <DraftBanner draft={draft} onDone={() => setDraft(null)} /> : null}

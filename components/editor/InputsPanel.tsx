@@ -35,7 +35,7 @@ function Row({
   );
 }
 
-const kindLabels = { blocks: 'Blocks on a strip', beam: 'Beam', wall: 'Wall' } as const;
+const kindLabels = { blocks: 'Blocks', beam: 'Beam', wall: 'Wall' } as const;
 
 export function InputsPanel() {
   const store = useEditorStore();
@@ -146,7 +146,7 @@ export function InputsPanel() {
             >
               <button
                 type="button"
-                className="min-h-11 flex-1 text-left text-sm"
+                className="min-h-11 min-w-0 flex-1 text-left text-sm"
                 onClick={() => store.getState().setUi({ selection: { kind: 'support', index: i } })}
               >
                 Row {i + 1} · {formatLength(dist(row.a, row.b), units)}
@@ -154,7 +154,7 @@ export function InputsPanel() {
               <select
                 aria-label={`Row ${i + 1} kind`}
                 disabled={ro}
-                className={`${controlClasses} w-auto`}
+                className={`${controlClasses} !w-28 shrink-0`}
                 value={row.kind}
                 onChange={(e) =>
                   store.getState().run(setSupportKind, {

@@ -14,8 +14,6 @@ import {
 } from '@/canvas/commands/view';
 import type { Command } from '@/canvas/commands/types';
 import { useEditor, useEditorStore } from '@/canvas/store/EditorStoreProvider';
-import { FlagSummary } from './FlagSummary';
-import { SaveStatus } from './SaveStatus';
 import { Icon, icons, ToolButton } from './ToolButton';
 
 function Divider() {
@@ -144,10 +142,6 @@ export function Toolbar() {
           </ToolButton>
         </>
       )}
-      <div className="ml-auto flex shrink-0 items-center gap-2 pl-2">
-        <FlagSummary />
-        {readOnly ? null : <SaveStatus />}
-      </div>
     </div>
   );
 }

@@ -1,9 +1,11 @@
 // The plan editor on a tablet (touch, 820 x 1180): draw by taps and typed lengths, see the frame,
 // drag a support row too far and see the flag, undo, reload; a colleague's save gives the conflict choice.
-import { expect, test, type Browser, type Page } from '@playwright/test';
+import { expect, test, type Browser, type BrowserContext, type Page } from '@playwright/test';
 import { signIn } from './helpers';
 
 test.use({ viewport: { width: 820, height: 1180 }, hasTouch: true, isMobile: true });
+// The editor bundle and the engine worker load on first open; a shared CI machine can be slow.
+test.setTimeout(120_000);
 
 async function newDesign(page: Page, name: string): Promise<{ jobId: string; designId: string }> {
   const job = await page.request.post('/api/jobs', {
@@ -138,16 +140,18 @@ test('draw a 6 m x 4 m deck by taps and typed lengths, break a span, undo, reloa
   expect(saved.document.supports).toEqual([]);
 });
 
-async function openAs(browser: Browser, designId: string) {
+type Session = Awaited<ReturnType<BrowserContext['storageState']>>;
+
+async function openAs(browser: Browser, designId: string, storageState: Session) {
   const ctx = await browser.newContext({
     viewport: { width: 820, height: 1180 },
     hasTouch: true,
     isMobile: true,
+    storageState,
   });
   const page = await ctx.newPage();
-  await signIn(page, 'designer');
   await page.goto(`/designs/${designId}`);
-  await expect(page.getByTestId('plan-canvas')).toBeVisible();
+  await expect(page.getByTestId('plan-canvas')).toBeVisible({ timeout: 30_000 });
   return { ctx, page };
 }
 
@@ -164,8 +168,10 @@ test('a colleague saves first: the editor offers to load theirs or keep this one
 }) => {
   await signIn(page, 'designer');
   const { designId } = await newDesign(page, 'Shared design');
-  const a = await openAs(browser, designId);
-  const b = await openAs(browser, designId);
+  // Two tablets signed in as the same designer (the session is shared, not signed in twice).
+  const session = await page.context().storageState();
+  const a = await openAs(browser, designId, session);
+  const b = await openAs(browser, designId, session);
 
   await setHeight(b.page, '520');
   await expect(b.page.getByTestId('save-status')).toHaveAttribute('data-status', 'saved', {

@@ -169,6 +169,13 @@ describe('product schema (shared by API and form)', () => {
     });
     expect(b.error!.issues.map((i) => i.path.join('.'))).toContain('boardMaxCentres');
   });
+  it('an empty joist reports every missing piece at once (kind rules run beside field errors)', () => {
+    const r = productInputSchema.safeParse({ kind: 'joist', name: '', sku: '', unitPrice: 0 });
+    const paths = r.error!.issues.map((i) => i.path.join('.'));
+    expect(paths).toEqual(
+      expect.arrayContaining(['name', 'sku', 'dimensions.widthMm', 'stockLengthsMm', 'spanTable']),
+    );
+  });
   it('prices: no negatives, at most two decimals; screws need no stock length', () => {
     const base = { kind: 'screw', name: 'Screw', sku: 'S', dimensions: {} } as const;
     expect(productInputSchema.safeParse({ ...base, unitPrice: -1 }).success).toBe(false);

@@ -125,37 +125,40 @@ const productFields = {
   active: z.boolean().default(true),
 };
 
+/** The fields the kind rules read; loose, because the rules also run when other fields failed. */
 type ProductShape = {
   kind: ProductKind;
-  unit: string;
-  stockLengthsMm: number[];
-  dimensions: { widthMm?: number; depthMm?: number };
-  spanTable: { centresMm: number }[] | null;
-  material: unknown;
-  boardMaxCentres: unknown;
+  stockLengthsMm?: unknown;
+  dimensions?: unknown;
+  spanTable?: unknown;
+  material?: unknown;
+  boardMaxCentres?: unknown;
 };
 
 /** Rules that depend on the kind: what a joist, beam or board must state for the checks. */
 export function checkProductByKind(p: ProductShape, ctx: z.RefinementCtx): void {
   const issue = (path: string[], message: string) =>
     ctx.addIssue({ code: 'custom', path, message });
+  const dims = (typeof p.dimensions === 'object' && p.dimensions !== null ? p.dimensions : {}) as {
+    widthMm?: unknown;
+    depthMm?: unknown;
+  };
+  const stock = Array.isArray(p.stockLengthsMm) ? p.stockLengthsMm : [];
+  const table = Array.isArray(p.spanTable) ? (p.spanTable as { centresMm?: unknown }[]) : [];
   if (SPANNING_KINDS.includes(p.kind) || p.kind === 'board') {
-    if (p.dimensions.widthMm === undefined) issue(['dimensions', 'widthMm'], 'Width is required');
-    if (p.dimensions.depthMm === undefined) issue(['dimensions', 'depthMm'], 'Depth is required');
+    if (dims.widthMm === undefined) issue(['dimensions', 'widthMm'], 'Width is required');
+    if (dims.depthMm === undefined) issue(['dimensions', 'depthMm'], 'Depth is required');
   }
-  if (LENGTH_KINDS.includes(p.kind) && p.stockLengthsMm.length === 0) {
+  if (LENGTH_KINDS.includes(p.kind) && stock.length === 0) {
     issue(['stockLengthsMm'], 'Give at least one stock length');
   }
   if (SPANNING_KINDS.includes(p.kind)) {
-    const hasTable = !!p.spanTable && p.spanTable.length > 0;
-    if (!hasTable && !p.material) {
+    if (table.length === 0 && !p.material) {
       issue(['spanTable'], 'Give the maker’s span table or the material properties');
     }
-    if (hasTable) {
-      const centres = p.spanTable!.map((r) => r.centresMm);
-      if (new Set(centres).size !== centres.length) {
-        issue(['spanTable'], 'Each span table row needs different centres');
-      }
+    const centres = table.map((r) => r?.centresMm);
+    if (new Set(centres).size !== centres.length) {
+      issue(['spanTable'], 'Each span table row needs different centres');
     }
   }
   if (p.kind === 'board' && !p.boardMaxCentres) {
@@ -163,8 +166,16 @@ export function checkProductByKind(p: ProductShape, ctx: z.RefinementCtx): void 
   }
 }
 
+// The kind rules run even when other fields failed, so the form shows every missing piece at once.
+const kindRulesApply = (payload: { value: unknown }) => {
+  const v = payload.value as { kind?: unknown } | null;
+  return typeof v === 'object' && v !== null && PRODUCT_KINDS.includes(v.kind as ProductKind);
+};
+
 /** A product as the owner enters it (create); the same schema validates the form and the API. */
-export const productInputSchema = z.object(productFields).superRefine(checkProductByKind);
+export const productInputSchema = z
+  .object(productFields)
+  .superRefine((p, ctx) => checkProductByKind(p, ctx), { when: kindRulesApply });
 
 /** A change to a product: any fields; the merged product is checked again with productInputSchema. */
 export const productPatchSchema = z

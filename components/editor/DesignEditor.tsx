@@ -15,6 +15,7 @@ import { ConflictDialog } from './ConflictDialog';
 import { DraftBanner } from './DraftBanner';
 import { FlagSummary } from './FlagSummary';
 import { SaveStatus } from './SaveStatus';
+import { MaterialsTab } from './MaterialsTab';
 import { SidePanel } from './SidePanel';
 import { Toolbar } from './Toolbar';
 
@@ -135,7 +136,11 @@ function EditorBody() {
           aria-label="Design panel"
           className={`flex min-h-0 flex-col border-t border-ash-200 bg-white lg:w-[360px] lg:border-l lg:border-t-0 ${collapsed ? '' : 'h-[42%] lg:h-auto'}`}
         >
-          <SidePanel collapsed={collapsed} onToggle={() => setCollapsed((c) => !c)} />
+          <SidePanel
+            materials={<MaterialsTab />}
+            collapsed={collapsed}
+            onToggle={() => setCollapsed((c) => !c)}
+          />
           <p
             data-testid="standing-caution"
             className="border-t border-larch-200 bg-larch-50 px-3 py-1.5 text-[11px] leading-snug text-larch-900"

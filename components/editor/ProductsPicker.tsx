@@ -19,7 +19,7 @@ export function ProductsPicker() {
 
   useEffect(() => {
     let live = true;
-    fetch('/api/products', { cache: 'no-store' })
+    fetch('/api/products?status=active', { cache: 'no-store' })
       .then(async (r) => {
         if (!r.ok) throw new Error(String(r.status));
         const body = (await r.json()) as unknown;

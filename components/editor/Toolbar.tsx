@@ -13,6 +13,7 @@ import {
   zoomOut,
 } from '@/canvas/commands/view';
 import type { Command } from '@/canvas/commands/types';
+import { useShallow } from 'zustand/react/shallow';
 import { useEditor, useEditorStore } from '@/canvas/store/EditorStoreProvider';
 import { Icon, icons, ToolButton } from './ToolButton';
 
@@ -22,10 +23,23 @@ function Divider() {
 
 export function Toolbar() {
   const store = useEditorStore();
-  const s = useEditor((x) => x);
-  const readOnly = s.meta.readOnly;
-  const can = <A,>(c: Command<A>, args: A) =>
-    !(c.edits && readOnly) && (!c.predicate || c.predicate(s, args));
+  // Narrow selection: the toolbar re-renders when one of these changes, not on every drag move.
+  const s = useEditor(
+    useShallow((x) => {
+      const can = <A,>(c: Command<A>, args: A) =>
+        !(c.edits && x.meta.readOnly) && (!c.predicate || c.predicate(x, args));
+      return {
+        readOnly: x.meta.readOnly,
+        tool: x.ui.tool,
+        layers: x.ui.layers,
+        snap: x.ui.snap,
+        canUndo: can(undo, undefined),
+        canRedo: can(redo, undefined),
+        canDelete: can(deleteSelection, undefined),
+      };
+    }),
+  );
+  const readOnly = s.readOnly;
   const run = <A,>(c: Command<A>, args: A) => store.getState().run(c, args);
 
   return (
@@ -43,7 +57,7 @@ export function Toolbar() {
           <ToolButton
             label="Select and move"
             hint="V"
-            active={s.ui.tool === 'select'}
+            active={s.tool === 'select'}
             onClick={() => run(selectTool, undefined)}
           >
             <Icon d={icons.select} />
@@ -51,7 +65,7 @@ export function Toolbar() {
           <ToolButton
             label="Draw outline"
             hint="O"
-            active={s.ui.tool === 'outline'}
+            active={s.tool === 'outline'}
             onClick={() => run(outlineTool, undefined)}
           >
             <Icon d={icons.outline} />
@@ -59,7 +73,7 @@ export function Toolbar() {
           <ToolButton
             label="Add support row"
             hint="S"
-            active={s.ui.tool === 'support'}
+            active={s.tool === 'support'}
             onClick={() => run(supportTool, undefined)}
           >
             <Icon d={icons.support} />
@@ -68,7 +82,7 @@ export function Toolbar() {
           <ToolButton
             label="Undo"
             hint="Ctrl+Z"
-            disabled={!can(undo, undefined)}
+            disabled={!s.canUndo}
             onClick={() => run(undo, undefined)}
           >
             <Icon d={icons.undo} />
@@ -76,7 +90,7 @@ export function Toolbar() {
           <ToolButton
             label="Redo"
             hint="Ctrl+Shift+Z"
-            disabled={!can(redo, undefined)}
+            disabled={!s.canRedo}
             onClick={() => run(redo, undefined)}
           >
             <Icon d={icons.redo} />
@@ -84,7 +98,7 @@ export function Toolbar() {
           <ToolButton
             label="Delete"
             hint="Del"
-            disabled={!can(deleteSelection, undefined)}
+            disabled={!s.canDelete}
             onClick={() => run(deleteSelection, undefined)}
           >
             <Icon d={icons.trash} />
@@ -104,14 +118,14 @@ export function Toolbar() {
       <ToolButton
         label="Show boards"
         hint="B"
-        active={s.ui.layers.boards}
+        active={s.layers.boards}
         onClick={() => run(toggleBoards, undefined)}
       >
         <Icon d={icons.boards} />
       </ToolButton>
       <ToolButton
         label="Show dimensions"
-        active={s.ui.layers.dimensions}
+        active={s.layers.dimensions}
         onClick={() => run(toggleLayer, { layer: 'dimensions' })}
       >
         <Icon d={icons.dims} />
@@ -121,21 +135,21 @@ export function Toolbar() {
           <Divider />
           <ToolButton
             label="Snap to grid"
-            active={s.ui.snap.grid}
+            active={s.snap.grid}
             onClick={() => run(toggleSnap, { snap: 'grid' })}
           >
             <Icon d={icons.grid} />
           </ToolButton>
           <ToolButton
             label="Snap to 45° and 90°"
-            active={s.ui.snap.angle}
+            active={s.snap.angle}
             onClick={() => run(toggleSnap, { snap: 'angle' })}
           >
             <Icon d={icons.angle} />
           </ToolButton>
           <ToolButton
             label="Snap to corners"
-            active={s.ui.snap.points}
+            active={s.snap.points}
             onClick={() => run(toggleSnap, { snap: 'points' })}
           >
             <Icon d={icons.point} />

@@ -93,6 +93,11 @@ export function solveCutList(input: CutListInput, options: CutListOptions = {}):
   return cloneResult(result);
 }
 
+/** Forgets every cached cut list (for benchmarks that must time a cold solve). */
+export function clearCutListCache(): void {
+  cache.clear();
+}
+
 function cloneResult(r: CutListResult): CutListResult {
   return {
     ...r,

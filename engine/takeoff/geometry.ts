@@ -111,15 +111,21 @@ export class SegmentGrid {
       this.round = 1;
     }
     const out: number[] = [];
-    this.eachCell(x0, y0, x1, y1, (k) => {
-      const list = this.cells.get(k);
-      if (!list) return;
-      for (const i of list)
-        if (this.stamp[i] !== this.round) {
-          this.stamp[i] = this.round;
-          out.push(i);
+    const c = this.cell;
+    const i1 = Math.floor(x1 / c);
+    const j0 = Math.floor(y0 / c);
+    const j1 = Math.floor(y1 / c);
+    for (let i = Math.floor(x0 / c); i <= i1; i++)
+      for (let j = j0; j <= j1; j++) {
+        const list = this.cells.get((i + 4096) * 8192 + (j + 4096));
+        if (!list) continue;
+        for (let k = 0; k < list.length; k++) {
+          const s = list[k];
+          if (this.stamp[s] === this.round) continue;
+          this.stamp[s] = this.round;
+          out.push(s);
         }
-    });
+      }
     return out;
   }
 }

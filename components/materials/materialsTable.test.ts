@@ -5,6 +5,7 @@ import { formatMoney, groupLines, groupOf, quantityText } from './materialsTable
 describe('groupOf', () => {
   it.each([
     ['joist', 'frame'],
+    ['beam', 'frame'],
     ['board', 'boards'],
     ['borderBoard', 'boards'],
     ['clip', 'fixings'],

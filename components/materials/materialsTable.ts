@@ -16,6 +16,7 @@ const ORDER: MaterialsGroup[] = ['frame', 'boards', 'fixings', 'footings', 'sund
 // Product choice keys (DesignDocument.products, QuantityLine.product) by group.
 const BY_PRODUCT: Record<string, MaterialsGroup> = {
   joist: 'frame',
+  beam: 'frame',
   board: 'boards',
   borderBoard: 'boards',
   fascia: 'boards',

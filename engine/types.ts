@@ -141,7 +141,7 @@ export interface CutStock {
 export interface CutListResult {
   count: number;
   stock: CutStock[];
-  /** ceil(total demand incl. kerf / longest stock), for reporting. */
+  /** A proven lower bound on count: at least ceil(total demand incl. kerf / longest stock), raised by the L2 or LP bound where they are stronger. */
   lowerBound: number;
   /** True when the count was proven optimal. */
   optimal: boolean;

@@ -467,6 +467,17 @@ function groundLines(plan: FramePlanCore, design: DesignDocument, R: TakeOffRule
       product: 'post',
       basis: `Deck height above the ground at the post plus ${R.postEmbedMm} mm in the ground, rounded up to 100 mm (common practice, from memory).`,
     });
+  // Beams: support rows carried on posts, by length (their section and stock come from the catalogue).
+  const beams = plan.members.filter((m) => m.kind === 'support' && m.supportKind === 'beam');
+  const beamMm = beams.reduce((a, m) => a + m.lengthMm * m.ply, 0);
+  lines.push({
+    key: 'beams',
+    label: 'Beams on posts',
+    unit: 'm',
+    qty: r3(beamMm / 1000),
+    product: 'beam',
+    basis: `${beams.length} support row(s) of kind beam, their full length (every ply); joins over posts as the plan shows.`,
+  });
   // Fascia round every outline edge that does not stand against a wall.
   const walls = plan.supportRows.filter((r) => r.kind === 'wall');
   const nearWall = (p: [number, number]) => walls.some((w) => distToSegment(p, w.a, w.b) <= 100);

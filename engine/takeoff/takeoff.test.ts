@@ -130,6 +130,21 @@ describe('takeOff variants', () => {
     expect(line(q, 'concrete').qty).toBeCloseTo(base + holes, 3);
   });
 
+  it('lists beam rows by length, every ply', () => {
+    const { plan, design } = handDeck();
+    plan.members.push({
+      id: 'B1',
+      kind: 'support',
+      ply: 2,
+      a: [0, 1400],
+      b: [6000, 1400],
+      lengthMm: 6000,
+      supportKind: 'beam',
+    });
+    expect(line(takeOff(plan, design).quantities, 'beams').qty).toBe(12);
+    expect(takeOff(handDeck().plan, design).quantities.some((q) => q.key === 'beams')).toBe(false);
+  });
+
   it('counts each ply of a laminated member as a piece to cut and screws the plies together', () => {
     const { plan, design } = handDeck();
     const edge = plan.members.find((m) => m.id === 'j0a')!;

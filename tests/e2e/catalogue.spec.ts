@@ -28,7 +28,7 @@ test('the owner searches, adds, changes and removes a product', async ({ page })
   // A timber joist with material properties: the preview shows the engineered spans.
   await form.getByLabel('Name').fill(`E2E timber joist ${sku}`);
   await form.getByLabel('SKU').fill(sku);
-  await form.getByLabel('Price').fill('18.40');
+  await form.getByRole('textbox', { name: 'Price' }).fill('18.40');
   await form.getByLabel('Width').fill('47');
   await form.getByLabel('Depth').fill('200');
   await form.getByLabel('Stock lengths').fill('3600, 4.8 m');
@@ -52,7 +52,7 @@ test('the owner searches, adds, changes and removes a product', async ({ page })
   // Change the price.
   await row.getByRole('button', { name: `E2E timber joist ${sku}` }).click();
   const edit = page.getByRole('form', { name: `Change E2E timber joist ${sku}` });
-  await edit.getByLabel('Price').fill('19.95');
+  await edit.getByRole('textbox', { name: 'Price' }).fill('19.95');
   await edit.getByRole('button', { name: 'Save product' }).click();
   await expect(row).toContainText('19.95 per length');
 
@@ -63,7 +63,7 @@ test('the owner searches, adds, changes and removes a product', async ({ page })
   await dup.getByLabel('Kind').selectOption('screw');
   await dup.getByLabel('Name').fill('Duplicate screw');
   await dup.getByLabel('SKU').fill(sku);
-  await dup.getByLabel('Price').fill('0.30');
+  await dup.getByRole('textbox', { name: 'Price' }).fill('0.30');
   await dup.getByRole('button', { name: 'Add product' }).click();
   await expect(dup.getByText(`Another product already has the SKU “${sku}”`).first()).toBeVisible();
   await dup.getByRole('button', { name: 'Cancel' }).click();

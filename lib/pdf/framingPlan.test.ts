@@ -164,6 +164,8 @@ describe('framingPlanPdf', () => {
     expect(parts.length).toBeGreaterThanOrEqual(2);
     expect(norm(pdf.all)).toContain('30 000');
     expect(norm(pdf.all)).toContain('20 000');
+    // The L's inner edges are written along them (the overall chains give only 30 m and 20 m).
+    for (const edge of ['14 000', '16 000', '12 000', '8 000']) expect(titles[0]).toContain(edge);
     // Part sheets carry the cautions too.
     for (const p of parts) expect(p.toLowerCase()).toContain('buried services');
   });

@@ -177,7 +177,11 @@ function indexBoards(boards: BoardPiece[], design: DesignDocument): BoardIndex {
   return { boards, grid: new SegmentGrid(boards, 600, tolBoard), tolBoard, tolMember };
 }
 
-/** Distances along member m (from m.a) where board pieces cross it. */
+/**
+ * Distances along member m (from m.a) where board pieces cross it.
+ * WARNING: keep this exported. When it was module-private, the production minifier inlined it into
+ * crossingsByLine and lost its `idx` parameter (ReferenceError in the plan and materials routes).
+ */
 export function crossingsOn(m: Member, idx: BoardIndex): number[] {
   const { tolBoard, tolMember } = idx;
   const at: number[] = [];

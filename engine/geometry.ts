@@ -214,9 +214,10 @@ export function insetRing(ring: Pt[], d: number): Pt[] {
       out.push([p1[0] + n1[0] * d, p1[1] + n1[1] * d]);
     } else {
       // The mitre point sits on the bisector at d / cos(half the turn); (1 + dot) / 2 = cos^2.
-      // Very sharp corners are clamped so the point stays near the deck.
+      // It must stay on both offset lines (rims run parallel to their edges), so it is only
+      // capped for near-reversals, where the deck is a spike thinner than a joist anyway.
       const cosHalf = Math.sqrt(Math.max((1 + dot) / 2, 0));
-      const m = d / Math.max(cosHalf, 0.25);
+      const m = d / Math.max(cosHalf, 0.01);
       out.push([p1[0] + (bx / len) * m, p1[1] + (by / len) * m]);
     }
   }

@@ -12,7 +12,7 @@ import type {
   StepPlan,
   SupportRowPlan,
 } from './types';
-import { boundsOf, signedArea } from './geometry';
+import { boundsOf, distToSegment, signedArea } from './geometry';
 import { takeOff } from './takeoff';
 import { STANDING_CAUTION, checkGuard, checkStairFlight, type CodeFinding } from './codes';
 import { cleanOutline, frameContext } from './frame/outline';
@@ -97,12 +97,21 @@ export function layoutFrame(design: DesignDocument): FramePlanCore {
   rows.forEach((r, i) => {
     if (r.placed) r.id = `S${i + 1}`;
   });
-  bearLines(ctx, lines, rows, padded);
+  // Rims that carry joist ends: those on pads, and those with a row under both their ends.
+  const reach = ctx.w + 1;
+  const onRow = (p: Pt) => rows.some((r) => distToSegment(p, r.a, r.b) <= reach);
+  const carried = ctx.edges.filter(
+    (e) =>
+      e.kind !== 'parallel' &&
+      rimUsable(e) &&
+      (padded.includes(e) || (onRow(e.rimA) && onRow(e.rimB))),
+  );
+  bearLines(ctx, lines, rows, carried);
 
   // Boards, butt joints and the pair joists under them.
   const layout = layBoards(ctx, lines);
   const pairs = insertPairs(ctx, layout.joints, lines);
-  bearLines(ctx, pairs, rows, padded);
+  bearLines(ctx, pairs, rows, carried);
   lines = lines.concat(pairs).sort((a, b) => a.x - b.x || a.y0 - b.y0);
 
   // Stock pieces and joins.
@@ -126,6 +135,7 @@ export function layoutFrame(design: DesignDocument): FramePlanCore {
   // Rims across the joists, cut evenly from stock.
   const rimJoins = new Map<number, number[]>();
   const planJoins: JoistJoin[] = [];
+  const rimJoinsOff: { at: Pt; memberId: string }[] = [];
   for (const e of ctx.edges) {
     if (e.kind === 'parallel' || !rimUsable(e)) continue;
     const L = Math.hypot(e.rimB[0] - e.rimA[0], e.rimB[1] - e.rimA[1]);
@@ -148,12 +158,13 @@ export function layoutFrame(design: DesignDocument): FramePlanCore {
         lineId,
       });
       if (k > 0) {
-        planJoins.push({
-          at: W(at(ts[k])),
-          lineId,
-          memberIds: [`${lineId}.${k}`, `${lineId}.${k + 1}`],
-          onSupport: true,
-        });
+        // Pads go under the joins of padded rims; other rims need a row under the join.
+        const p = at(ts[k]);
+        const onSupport =
+          padded.includes(e) || rows.some((r) => distToSegment(p, r.a, r.b) <= ctx.w + 1);
+        const memberIds: [string, string] = [`${lineId}.${k}`, `${lineId}.${k + 1}`];
+        planJoins.push({ at: W(p), lineId, memberIds, onSupport });
+        if (!onSupport) rimJoinsOff.push({ at: W(p), memberId: memberIds[1] });
       }
     }
   }
@@ -235,13 +246,18 @@ export function layoutFrame(design: DesignDocument): FramePlanCore {
 
   // Joins of joist lines.
   for (const j of joins) planJoins.push(joinOut(ctx, j));
-  for (const j of joins) {
-    if (j.onSupport) continue;
+  const offSupport = [
+    ...joins
+      .filter((j) => !j.onSupport)
+      .map((j) => ({ at: W([j.line.x, j.y]), memberId: j.above })),
+    ...rimJoinsOff,
+  ];
+  for (const j of offSupport) {
     flags.push({
       code: 'joist-join-off-support',
       severity: 'error',
-      at: W([j.line.x, j.y]),
-      memberId: j.above,
+      at: j.at,
+      memberId: j.memberId,
       message: 'Joist join is not over a support row: move the join or add a support under it',
       source: PRACTICE,
       explain: `Joist joins must land over a support row (${PRACTICE}). Stock ${design.joist.stockMm} mm is shorter than the distance between the supports here.`,

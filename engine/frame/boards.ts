@@ -1,7 +1,9 @@
 // Board courses, border courses, staggered butt joints and the paired joists under them. Pure: engine only.
 import type { Pt } from '../types';
-import { boundsOf, insetRing, intersectIntervals, scanRing } from '../geometry';
+import { boundsOf, insetRing, intersectIntervals, pointInRing, scanRing } from '../geometry';
 import type { FrameContext, JoistLine } from './model';
+import { verticalsInside } from '../clip';
+import { trimAt } from './joists';
 
 /** One board piece in the layout frame. */
 export interface BoardRaw {
@@ -193,6 +195,8 @@ export function layBoards(ctx: FrameContext, lines: JoistLine[]): BoardLayout {
       const b = centre[(j + 1) % ring.length];
       const L = Math.hypot(b[0] - a[0], b[1] - a[1]);
       if ((b[0] - a[0]) * e.ux + (b[1] - a[1]) * e.uy <= 1) continue;
+      // Where the deck is narrower than its border courses the offset folds over: leave it out.
+      if (!pointInRing(a, ring) || !pointInRing(b, ring)) continue;
       const ux = (b[0] - a[0]) / L;
       const uy = (b[1] - a[1]) / L;
       // Mitred ends are longer on the outside: keep a board width in hand.
@@ -303,6 +307,30 @@ export function insertPairs(
     byKey.set(key, out);
   }
   const half = ctx.design.board.widthMm / 2;
+  // A pair beside a joist near the deck edge may poke past it: clip the pairs like any joist.
+  const inside = verticalsInside(
+    ctx.ring,
+    made.map((p) => p.x),
+  );
+  made.forEach((p, i) => {
+    let best: [number, number] | null = null;
+    for (const [a, b] of inside[i]) {
+      const lo = Math.max(p.y0, a + trimAt(ctx, p.x, a));
+      const hi = Math.min(p.y1, b - trimAt(ctx, p.x, b));
+      if (hi - lo > 1 && (!best || hi - lo > best[1] - best[0])) best = [lo, hi];
+    }
+    if (best) {
+      p.y0 = best[0];
+      p.y1 = best[1];
+    } else {
+      p.y1 = p.y0; // nothing left: dropped below
+    }
+    p.bearY = [p.y0, p.y1];
+  });
+  for (let i = made.length - 1; i >= 0; i--) if (made[i].y1 - made[i].y0 <= 1) made.splice(i, 1);
+  for (const list of byKey.values()) {
+    for (let i = list.length - 1; i >= 0; i--) if (list[i].y1 - list[i].y0 <= 1) list.splice(i, 1);
+  }
   for (const j of joints) {
     if (!j.line || j.side === 0) continue;
     const y = clampToLine(j.line, j.at[1]);

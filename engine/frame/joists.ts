@@ -4,8 +4,8 @@ import { distToSegment, subtractInterval } from '../geometry';
 import { verticalsInside } from '../clip';
 import type { EdgeInfo, FrameContext, JoistLine } from './model';
 
-/** Lines shorter than this (mm) are left out: too short to fix a board to. */
-const MIN_LINE_MM = 100;
+/** Lines shorter than this (mm) are left out. Kept tiny: a short joist in a sharp corner still carries board ends. */
+const MIN_LINE_MM = 1;
 
 interface Candidate {
   x: number;
@@ -23,8 +23,11 @@ export function endEdgeAt(ctx: FrameContext, x: number, y: number): EdgeInfo | n
   for (const e of ctx.edges) {
     if (e.kind === 'parallel') continue;
     const d = distToSegment([x, y], e.a, e.b);
-    if (d < bestD) {
-      bestD = d;
+    // At a corner both edges are "nearest": take the one the line crosses more squarely, whose
+    // rim it actually meets (the other only touches the corner).
+    const tie = Math.abs(d - bestD) <= 1;
+    if ((tie && best && Math.abs(e.ux) > Math.abs(best.ux)) || (!tie && d < bestD)) {
+      bestD = Math.min(d, bestD);
       best = e;
     }
   }
@@ -53,10 +56,12 @@ export function placeJoistLines(ctx: FrameContext): JoistLine[] {
   for (let x = first + c; x < bounds.maxX - w / 2; x += c) {
     candidates.push({ x, role: 'field', kind: 'joist', ply: 1 });
   }
-  const blockers: { x: number; lo: number; hi: number }[] = edgeRims.map((r) => ({
+  // Where field joists may not go; `field` is the side border joists face the field boards.
+  const blockers: { x: number; lo: number; hi: number; field: number }[] = edgeRims.map((r) => ({
     x: r.x,
     lo: r.lo,
     hi: r.hi,
+    field: 0,
   }));
   if (design.borderCourses > 0) {
     const bw = design.board.widthMm;
@@ -66,13 +71,18 @@ export function placeJoistLines(ctx: FrameContext): JoistLine[] {
     for (const r of edgeRims) {
       // Inward normal of a counter-clockwise ring points left of the edge direction.
       const inward = -Math.sign(r.edge.uy);
-      const eLo = Math.min(r.edge.a[1], r.edge.b[1]);
-      const eHi = Math.max(r.edge.a[1], r.edge.b[1]);
+      // Where the edge ends in a reflex (inside) corner the deck carries on past it: the border
+      // joists run on to the far edge so their ends stand on a rim rather than in mid-air.
+      const loAtA = r.edge.a[1] < r.edge.b[1];
+      const aReflex = isReflex(ctx, r.edge.index);
+      const bReflex = isReflex(ctx, (r.edge.index + 1) % ctx.ring.length);
+      const eLo = (loAtA ? aReflex : bReflex) ? -Infinity : Math.min(r.edge.a[1], r.edge.b[1]);
+      const eHi = (loAtA ? bReflex : aReflex) ? Infinity : Math.max(r.edge.a[1], r.edge.b[1]);
       const edgeX = r.edge.a[0];
       for (const off of [fieldEnd - w / 2, fieldEnd + w / 2]) {
         const x = edgeX + inward * off;
         candidates.push({ x, role: 'border', kind: 'joist', ply: 3, range: [eLo, eHi] });
-        blockers.push({ x, lo: eLo, hi: eHi });
+        blockers.push({ x, lo: eLo, hi: eHi, field: inward });
       }
     }
   }
@@ -98,9 +108,30 @@ export function placeJoistLines(ctx: FrameContext): JoistLine[] {
     }
     let pieces = trimmed;
     // A field joist may not sit on top of an edge joist or a border joist: cut it out there.
+    const moved: { x: number; ivs: [number, number][] }[] = [];
     if (cd.role === 'field') {
       for (const b of blockers) {
-        if (Math.abs(b.x - cd.x) < w) pieces = subtractInterval(pieces, b.lo - w, b.hi + w);
+        if (Math.abs(b.x - cd.x) >= w) continue;
+        // (half a joist past each end covers the mitre where the blocking rim meets the next)
+        const lo = b.lo - w / 2;
+        const hi = b.hi + w / 2;
+        if (b.field !== 0) {
+          // Beside a border joist, keep the field joist but move it alongside on the field side,
+          // so the boards there do not lose a joist (it would leave more than the centres).
+          const side = Math.sign(cd.x - b.x) || b.field;
+          const x = b.x + side * w;
+          const clash = blockers.some((o) => o !== b && Math.abs(o.x - x) < w - 1e-6);
+          const ivs = pieces
+            .map(([a, c]) => [Math.max(a, lo), Math.min(c, hi)] as [number, number])
+            .filter(([a, c]) => c - a >= MIN_LINE_MM);
+          if (!clash && side === b.field && ivs.length > 0) moved.push({ x, ivs });
+        }
+        pieces = subtractInterval(pieces, lo, hi);
+      }
+    }
+    for (const m of moved) {
+      for (const [y0, y1] of m.ivs) {
+        lines.push(makeLine(ctx, `L${++n}`, { ...cd, x: m.x }, y0, y1));
       }
     }
     for (const [y0, y1] of pieces) {
@@ -116,8 +147,17 @@ export function placeJoistLines(ctx: FrameContext): JoistLine[] {
   return lines;
 }
 
+/** True when the outline turns clockwise (inward) at vertex i of the counter-clockwise ring. */
+function isReflex(ctx: FrameContext, i: number): boolean {
+  const n = ctx.ring.length;
+  const p = ctx.ring[(i + n - 1) % n];
+  const q = ctx.ring[i];
+  const r = ctx.ring[(i + 1) % n];
+  return (q[0] - p[0]) * (r[1] - q[1]) - (q[1] - p[1]) * (r[0] - q[0]) < 0;
+}
+
 /** How far a line end at (x, y) on the outline must move inward to stop at the rim's inner face. */
-function trimAt(ctx: FrameContext, x: number, y: number): number {
+export function trimAt(ctx: FrameContext, x: number, y: number): number {
   const e = endEdgeAt(ctx, x, y);
   if (!e) return ctx.w;
   // Perpendicular depth w along a vertical line is w / |cos| of the edge's angle to the boards.

@@ -1,7 +1,6 @@
 // Support rows, pads and posts: honours the user's rows or places them, and finds where each joist line bears. Pure: engine only.
 import type { Pt } from '../types';
-import { crossVertical, dist, distToSegment } from '../geometry';
-import { horizontalsInside } from '../clip';
+import { crossVertical, dist, distToSegment, scanRing } from '../geometry';
 import type { EdgeInfo, FrameContext, JoistLine, RowSeg } from './model';
 
 /** The user's support rows, turned into the layout frame. */
@@ -121,10 +120,8 @@ export function placeRows(ctx: FrameContext, lines: JoistLine[]): RowSeg[] {
     gaps = next;
     rowsAt.push({ y, xs });
   }
-  const spans = horizontalsInside(
-    ctx.ring,
-    rowsAt.map((r) => r.y),
-  );
+  // Rows are not joists: a plain scanline finds where each crosses the deck.
+  const spans = rowsAt.map((r) => scanRing(ctx.ring, r.y));
   const kind = ctx.usePosts ? 'beam' : 'blocks';
   const out: RowSeg[] = [];
   rowsAt.forEach((r, i) => {

@@ -6,6 +6,8 @@ import sharp from 'sharp';
 import { signIn } from './helpers';
 
 test('quote, proposal, deposit, dev mailbox, site photo and frame stage', async ({ browser }) => {
+  // Four people, six pages and a payment round trip: longer than the default minute on a busy machine.
+  test.setTimeout(180_000);
   const stamp = Date.now();
   const clientEmail = `client.${stamp}@example.com`;
 

@@ -49,13 +49,20 @@ export async function startBusinessFakes(): Promise<{
     dataDir,
     stripeWebhookUrl: `http://127.0.0.1:${bridgePort}/api/webhooks/stripe`,
   });
-  Object.assign(process.env, fakes.env, { MAIL_RETRY_BASE_MS: '0' });
+  const settings = { ...fakes.env, MAIL_RETRY_BASE_MS: '0' };
+  const before = Object.fromEntries(Object.keys(settings).map((k) => [k, process.env[k]]));
+  Object.assign(process.env, settings);
   return {
     fakes,
     stripeBase: fakes.env.STRIPE_API_BASE,
     sinkUrl: fakes.env.MAIL_SINK_URL,
     webhookHits: () => hits,
     stop: async () => {
+      // Later test files in this worker must not inherit settings pointing at closed ports.
+      for (const [k, v] of Object.entries(before)) {
+        if (v === undefined) delete process.env[k];
+        else process.env[k] = v;
+      }
       await fakes.close();
       await new Promise((r) => bridge.close(r));
       fs.rmSync(dataDir, { recursive: true, force: true });

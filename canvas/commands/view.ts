@@ -12,7 +12,7 @@ export function fittedView(s: EditorData) {
   // Room around the deck for the side labels and dimension chains.
   const margin = Math.min(
     88,
-    Math.max(40, Math.min(s.ui.viewport.width, s.ui.viewport.height) * 0.11),
+    Math.max(56, Math.min(s.ui.viewport.width, s.ui.viewport.height) * 0.11),
   );
   return fitView(b, s.ui.viewport, margin);
 }

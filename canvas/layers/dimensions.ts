@@ -83,14 +83,15 @@ export function drawRowChain(
     ...rows.map((row) => (dot(row.a, u) + dot(row.b, u)) / 2),
     Math.max(...us),
   ].sort((a, b) => a - b);
-  // Put the chain on the side of the deck that is highest on screen, clear of the outline.
+  // The overall dimensions sit below and to the left: put the chain on the right or top side.
   const wTop = Math.max(...ws);
   const wBottom = Math.min(...ws);
   const at = (uu: number, ww: number): Pt => [u[0] * uu + w[0] * ww, u[1] * uu + w[1] * ww];
-  const topScreen = sy(v, at(0, wTop)) - sy(v, at(0, 0));
-  const bottomScreen = sy(v, at(0, wBottom)) - sy(v, at(0, 0));
-  const wLine = topScreen < bottomScreen ? wTop : wBottom;
-  const sign = topScreen < bottomScreen ? 1 : -1;
+  const uMid = (Math.min(...us) + Math.max(...us)) / 2;
+  const score = (p: Pt) => sx(v, p) - sy(v, p);
+  const topFirst = score(at(uMid, wTop)) >= score(at(uMid, wBottom));
+  const wLine = topFirst ? wTop : wBottom;
+  const sign = topFirst ? 1 : -1;
   const off = (OFFSET_PX / v.scale) * sign;
   for (let i = 0; i + 1 < stops.length; i++) {
     const a = at(stops[i], wLine + off);

@@ -93,7 +93,7 @@ function DrawingEntry() {
               type="number"
               inputMode="decimal"
               aria-label="Direction in degrees"
-              className={`${controlClasses} w-24`}
+              className={`${controlClasses} !w-24`}
               value={angle}
               onChange={(e) => setAngle(Number(e.target.value) || 0)}
             />
@@ -163,7 +163,7 @@ function SideEditor({ index }: { index: number }) {
                 type="number"
                 inputMode="decimal"
                 aria-label="Side direction in degrees"
-                className={`${controlClasses} w-24`}
+                className={`${controlClasses} !w-24`}
                 defaultValue={ang}
                 onBlur={(e) =>
                   store

@@ -84,22 +84,19 @@ export async function run(): Promise<EditorFpsResult | null> {
     const corners = JSON.parse((await canvas.getAttribute('data-corners'))!) as [number, number][];
     const start: [number, number] = [box.x + corners[2][0], box.y + corners[2][1]];
 
-    await page.evaluate(() => {
-      const w = window as unknown as { __frames: number[]; __plans: number; __stop: boolean };
-      w.__frames = [];
-      w.__plans = 0;
-      w.__stop = false;
-      const tick = (t: number) => {
-        w.__frames.push(t);
-        if (!w.__stop) requestAnimationFrame(tick);
-      };
+    // A string, not a function: tsx would wrap named helpers in __name(), which the page lacks.
+    await page.evaluate(`(() => {
+      window.__frames = [];
+      window.__plans = 0;
+      window.__stop = false;
+      function tick(t) {
+        window.__frames.push(t);
+        if (!window.__stop) requestAnimationFrame(tick);
+      }
       requestAnimationFrame(tick);
-      const el = document.querySelector('[data-testid=design-editor]')!;
-      new MutationObserver(() => (w.__plans += 1)).observe(el, {
-        attributes: true,
-        attributeFilter: ['data-plan-ms'],
-      });
-    });
+      const el = document.querySelector('[data-testid=design-editor]');
+      new MutationObserver(() => { window.__plans += 1; }).observe(el, { attributes: true, attributeFilter: ['data-plan-ms'] });
+    })()`);
 
     const cdp = await ctx.newCDPSession(page);
     const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', x: number, y: number) =>
@@ -116,11 +113,9 @@ export async function run(): Promise<EditorFpsResult | null> {
       await page.waitForTimeout(16);
     }
     await touch('touchEnd', start[0], start[1]);
-    const r = await page.evaluate(() => {
-      const w = window as unknown as { __frames: number[]; __plans: number; __stop: boolean };
-      w.__stop = true;
-      return { frames: w.__frames, plans: w.__plans };
-    });
+    const r = (await page.evaluate(
+      `(() => { window.__stop = true; return { frames: window.__frames, plans: window.__plans }; })()`,
+    )) as { frames: number[]; plans: number };
     const t = r.frames;
     const gaps = t
       .slice(1)

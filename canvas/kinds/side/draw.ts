@@ -33,10 +33,10 @@ export function drawSides(
       ctx.stroke();
     }
     if (len < 40) continue;
-    // Outward normal on screen: a counter-clockwise plan is clockwise on screen (y runs down),
-    // where the outside of side a→b lies to the left of its direction.
-    const nx = ((ay - by) / len) * (ccw ? -1 : 1);
-    const ny = ((bx - ax) / len) * (ccw ? -1 : 1);
+    // Outward normal on screen. A counter-clockwise plan (y up) is clockwise on screen (y down);
+    // e.g. its bottom side runs left to right on screen and its outside is below: (0, +1).
+    const nx = ((ay - by) / len) * (ccw ? 1 : -1);
+    const ny = ((bx - ax) / len) * (ccw ? 1 : -1);
     const mx = (ax + bx) / 2 + nx * 16;
     const my = (ay + by) / 2 + ny * 16;
     label(ctx, formatLength(dist(a, b), opts.units), mx, my, {

@@ -39,6 +39,10 @@ export const joistSpecSchema = z.object({
   stockMm: mm('Joist stock length').positive(),
   maxSpanMm: mm('Joist maximum span').positive(),
   maxCantileverMm: mm('Joist maximum cantilever').min(0),
+  /** Where maxSpanMm / maxCantileverMm come from (set when chosen from the catalogue; see engine/products). */
+  source: z.string().max(500).optional(),
+  /** The working behind those limits: table row or formulas with numbers, for flag explanations. */
+  limitExplain: z.string().max(4000).optional(),
 });
 
 export const boardSpecSchema = z.object({
@@ -47,6 +51,10 @@ export const boardSpecSchema = z.object({
   endGapMm: mm('Board end gap').min(0),
   stockMm: mm('Board stock length').positive(),
   maxSpanMm: mm('Board maximum span').positive(),
+  /** Where maxSpanMm comes from (set when chosen from the catalogue; see engine/products). */
+  source: z.string().max(500).optional(),
+  /** The working behind that limit, for flag explanations. */
+  limitExplain: z.string().max(4000).optional(),
 });
 
 export const nogginRuleSchema = z.discriminatedUnion('kind', [

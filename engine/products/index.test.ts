@@ -6,6 +6,7 @@ import {
   lookupSpanTable,
   productInputSchema,
   specsFromProducts,
+  withProductSpecs,
   type CatalogueProduct,
   type ProductInput,
 } from '.';
@@ -196,5 +197,21 @@ describe('product schema (shared by API and form)', () => {
       boardMaxCentres: { straightMm: 300, angledMm: 400 },
     });
     expect(b.error!.issues[0].path.join('.')).toBe('boardMaxCentres.angledMm');
+  });
+});
+
+describe('withProductSpecs', () => {
+  it('puts the chosen limits, their source and working into the design; same design when unchanged', async () => {
+    const { exampleDesign } = await import('../schema');
+    const design = exampleDesign();
+    const specs = specsFromProducts({ joist: timberJoist, board }, 'uk', design.joistCentresMm);
+    const next = withProductSpecs(design, specs);
+    expect(next).not.toBe(design);
+    expect(next.joist.maxSpanMm).toBe(specs.joist!.maxSpanMm);
+    expect(next.joist.source).toContain('engineered span');
+    expect(next.joist.limitExplain).toContain('Design Aid No. 6');
+    expect(next.board.source).toContain('maker');
+    expect(withProductSpecs(next, specs)).toBe(next);
+    expect(design.joist.source).toBeUndefined(); // input untouched
   });
 });

@@ -1,6 +1,6 @@
 // Turns the catalogue products chosen for a design into the engine's joist and board specs, with where each limit comes from. Pure.
 import { designLoads, STANDING_CAUTION } from '../codes';
-import type { CodeBasis } from '../schema';
+import type { CodeBasis, DesignDocument } from '../schema';
 import { engineeredSpan } from '../span';
 import type { CatalogueProduct, SpanTableRow } from './schema';
 
@@ -236,4 +236,41 @@ export function specsFromProducts(
 
 function round3(v: number): number {
   return Math.round(v * 1000) / 1000;
+}
+
+/**
+ * The design with its joist and board specs replaced by those from the chosen products (limits,
+ * their source and working carried along for flag explanations). Returns the same design when
+ * nothing changes.
+ */
+export function withProductSpecs(design: DesignDocument, specs: SpecsFromProducts): DesignDocument {
+  let next = design;
+  if (specs.joist) {
+    const { widthMm, depthMm, stockMm, maxSpanMm, maxCantileverMm, source, explain } = specs.joist;
+    const joist = {
+      widthMm,
+      depthMm,
+      stockMm,
+      maxSpanMm,
+      maxCantileverMm,
+      source,
+      limitExplain: explain,
+    };
+    if (!sameSpec(design.joist, joist)) next = { ...next, joist };
+  }
+  if (specs.board) {
+    const { widthMm, gapMm, endGapMm, stockMm, maxSpanMm, source, explain } = specs.board;
+    const board = { widthMm, gapMm, endGapMm, stockMm, maxSpanMm, source, limitExplain: explain };
+    if (!sameSpec(design.board, board)) next = { ...next, board };
+  }
+  return next;
+}
+
+function sameSpec(a: object, b: object): boolean {
+  const ka = Object.keys(a).filter((k) => (a as Record<string, unknown>)[k] !== undefined);
+  const kb = Object.keys(b).filter((k) => (b as Record<string, unknown>)[k] !== undefined);
+  return (
+    ka.length === kb.length &&
+    kb.every((k) => (a as Record<string, unknown>)[k] === (b as Record<string, unknown>)[k])
+  );
 }

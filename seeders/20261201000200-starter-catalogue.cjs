@@ -48,8 +48,10 @@ const larchfield = [
     unit_price: '13.80',
     stock_lengths_mm: [3000, 3600, 4200, 4800],
     dimensions: { widthMm: 47, depthMm: 150 },
-    // Strength class C24 (BS EN 338): typical values, from memory — check against the grader's data.
-    material: { EMPa: 11000, fbMPa: 24, fvMPa: 4, densityKgM3: 420 },
+    // The engineered span check wants ALLOWABLE (working) stresses, not BS EN 338 characteristic
+    // strengths. C24 grade stresses of BS 5268-2 (bending 7.5, shear 0.71, E mean 10 800 MPa) times
+    // the wet-exposure factors (0.8 bending, 0.9 shear, 0.8 E), all from memory: check before use.
+    material: { EMPa: 8640, fbMPa: 6, fvMPa: 0.64, densityKgM3: 420 },
   }),
   product(3, LARCHFIELD, {
     kind: 'board',

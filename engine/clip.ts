@@ -1,5 +1,5 @@
 // Clips framing lines to the deck outline with the Clipper2 polygon library. Pure: imports only clipper2-js and engine geometry.
-import { Clipper, FillRule, Path64, Paths64, Point64 } from 'clipper2-js';
+import { Clipper, FillRule, Path64, Paths64 } from 'clipper2-js';
 import type { Pt } from './types';
 import { EPS } from './geometry';
 
@@ -10,7 +10,8 @@ const HALF = 0.5;
 
 function toPath(ring: Pt[]): Path64 {
   const path = new Path64();
-  for (const [x, y] of ring) path.push(new Point64(Math.round(x * SCALE), Math.round(y * SCALE)));
+  // Plain {x, y} records: Clipper2 only reads the fields, and Point64's constructor is costly.
+  for (const [x, y] of ring) path.push({ x: Math.round(x * SCALE), y: Math.round(y * SCALE) });
   return path;
 }
 

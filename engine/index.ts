@@ -2,9 +2,13 @@
 import { designDocumentSchema, type DesignDocument } from './schema';
 import { migrateDesign } from './migrate';
 
+/** The design document schema and its types. */
 export * from './schema';
+/** The frame plan types. */
 export * from './types';
+/** The layout (planFrame adds the take-off and cut list). */
 export { planFrame, layoutFrame } from './plan';
+/** Document versions and their migrators. */
 export {
   migrateDesign,
   CURRENT_DESIGN_VERSION,

@@ -35,6 +35,7 @@ export interface CourseRaw {
   xb: number;
 }
 
+/** Everything layBoards produces: board pieces, butt joints and the field courses. */
 export interface BoardLayout {
   boards: BoardRaw[];
   joints: JointRaw[];
@@ -254,10 +255,10 @@ export function insertPairs(
   for (const j of joints) {
     const line = j.line;
     if (!line || j.side === 0) continue;
-    const stops = [line.y0, ...line.supports, line.y1];
+    // Bay k runs from stop k to stop k + 1, stops being [y0, ...supports, y1].
     const y = clampToLine(line, j.at[1]);
     let bay = 0;
-    while (bay + 2 < stops.length && stops[bay + 1] < y) bay++;
+    while (bay < line.supports.length && line.supports[bay] < y) bay++;
     const key = `${line.id}|${j.side}`;
     let entry = wanted.get(key);
     if (!entry) {

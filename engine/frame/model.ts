@@ -11,6 +11,7 @@ export type EdgeKind =
   /** Crosses the joists at a steeper angle: joists end on it and its rim stands on pads. */
   | 'angled';
 
+/** One outline edge in the layout frame, with its rim centreline. */
 export interface EdgeInfo {
   index: number;
   a: Pt;

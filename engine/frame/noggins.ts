@@ -1,5 +1,15 @@
 // Noggin (blocking) rows between neighbouring joists, by the design's noggin rule. Pure: engine only.
 import type { FrameContext, JoistLine } from './model';
+import { segmentsIntersect } from '../geometry';
+
+/** True when the noggin from x0 to x1 at y would cross the deck edge (a notch between joists). */
+function crossesEdge(ctx: FrameContext, x0: number, x1: number, y: number): boolean {
+  const n = ctx.ring.length;
+  for (let i = 0; i < n; i++) {
+    if (segmentsIntersect([x0, y], [x1, y], ctx.ring[i], ctx.ring[(i + 1) % n])) return true;
+  }
+  return false;
+}
 
 /** One noggin between two joist lines at height y (layout frame). */
 export interface NogginRaw {
@@ -48,7 +58,9 @@ export function placeNoggins(ctx: FrameContext, lines: JoistLine[]): NogginRaw[]
           const r = lines[j];
           if (r.x - l.x < 0.5) continue;
           if (r.y0 <= y && y <= r.y1) {
-            if (r.x - l.x >= minGap && r.x - l.x <= maxGap) out.push({ y, left: l, right: r });
+            if (r.x - l.x >= minGap && r.x - l.x <= maxGap && !crossesEdge(ctx, l.x, r.x, y)) {
+              out.push({ y, left: l, right: r });
+            }
             break;
           }
         }

@@ -3,6 +3,7 @@ import type { DesignDocument, StepInput } from '../schema';
 import type { BoardPiece, Member, Pt, StepPlan } from '../types';
 import { pointInRing } from '../geometry';
 
+/** One flight of steps laid out: its plan, frame members, tread boards and flag point. */
 export interface StepLayout {
   plan: StepPlan;
   members: Member[];

@@ -133,6 +133,7 @@ export function placeRows(ctx: FrameContext, lines: JoistLine[]): RowSeg[] {
   return out;
 }
 
+/** Pads and posts placed, and any pad gaps left over the limit. */
 export interface PadPlan {
   /** Pad or post positions (layout frame). */
   points: Pt[];

@@ -110,7 +110,7 @@ test('quote, proposal, deposit, dev mailbox, site photo and frame stage', async 
   await crew.goto('/jobs');
   await expect(
     crew
-      .locator('tr, li')
+      .getByRole('row')
       .filter({ hasText: `Terrace deck ${stamp}` })
       .getByTestId('job-progress'),
   ).toHaveText('Frame done');

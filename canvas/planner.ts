@@ -3,9 +3,12 @@
 import type { DesignDocument } from '@/engine/schema';
 import type { FramePlan } from '@/engine/types';
 
+/** Where the engine ran: in the Web Worker or on the page's own thread. */
+export type PlanVia = 'worker' | 'main';
+
 export type PlanResult =
-  | { ok: true; doc: DesignDocument; plan: FramePlan; ms: number }
-  | { ok: false; doc: DesignDocument; error: string; ms: number };
+  | { ok: true; doc: DesignDocument; plan: FramePlan; ms: number; via: PlanVia }
+  | { ok: false; doc: DesignDocument; error: string; ms: number; via: PlanVia };
 
 export interface Planner {
   request(doc: DesignDocument): void;
@@ -22,9 +25,10 @@ export function runPlan(planFrame: PlanFn, doc: DesignDocument): PlanResult {
   const t0 = now();
   try {
     const plan = planFrame(doc);
-    return { ok: true, doc, plan, ms: now() - t0 };
+    return { ok: true, doc, plan, ms: now() - t0, via: 'main' };
   } catch (e) {
-    return { ok: false, doc, error: e instanceof Error ? e.message : String(e), ms: now() - t0 };
+    const error = e instanceof Error ? e.message : String(e);
+    return { ok: false, doc, error, ms: now() - t0, via: 'main' };
   }
 }
 
@@ -90,8 +94,8 @@ export function createWorkerPlanner(worker: Worker): Planner {
     const doc = inFlight.doc;
     inFlight = null;
     const r: PlanResult = msg.ok
-      ? { ok: true, doc, plan: msg.plan, ms: msg.ms }
-      : { ok: false, doc, error: msg.error, ms: msg.ms };
+      ? { ok: true, doc, plan: msg.plan, ms: msg.ms, via: 'worker' }
+      : { ok: false, doc, error: msg.error, ms: msg.ms, via: 'worker' };
     for (const l of listeners) l(r);
     if (waiting) {
       const next = waiting;

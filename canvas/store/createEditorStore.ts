@@ -28,6 +28,7 @@ export interface EditorActions {
     forDoc: DesignDocument,
     ms: number | null,
     error?: string | null,
+    via?: 'worker' | 'main',
   ): void;
 }
 
@@ -146,8 +147,8 @@ export function createEditorStore(init: EditorInit): EditorStore {
           save: { ...s.save, version, status: 'unsaved' },
         });
       },
-      setPlan(plan, forDoc, ms, error = null) {
-        set({ plan: { plan, planDoc: forDoc, ms, error } });
+      setPlan(plan, forDoc, ms, error = null, via) {
+        set({ plan: { plan, planDoc: forDoc, ms, error, via } });
       },
     };
   });
@@ -157,8 +158,8 @@ export function createEditorStore(init: EditorInit): EditorStore {
     planner.onResult((r) => {
       const cur = store.getState().plan;
       // A failed recompute keeps the last good plan on screen and says why.
-      if (r.ok) store.getState().setPlan(r.plan, r.doc, r.ms, null);
-      else store.getState().setPlan(cur.plan, r.doc, r.ms, r.error);
+      if (r.ok) store.getState().setPlan(r.plan, r.doc, r.ms, null, r.via);
+      else store.getState().setPlan(cur.plan, r.doc, r.ms, r.error, r.via);
     });
     planner.request(init.doc);
     store.subscribe((s, prev) => {

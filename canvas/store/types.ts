@@ -58,6 +58,8 @@ export interface PlanState {
   planDoc: DesignDocument | null;
   error: string | null;
   ms: number | null;
+  /** Where the last recompute ran. */
+  via?: 'worker' | 'main';
 }
 
 export interface EditorMeta {

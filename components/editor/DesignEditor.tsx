@@ -60,6 +60,7 @@ function EditorBody() {
   const store = useEditorStore();
   const meta = useEditor((s) => s.meta);
   const planMs = useEditor((s) => s.plan.ms);
+  const planVia = useEditor((s) => s.plan.via);
   const root = useRef<HTMLDivElement>(null);
   const [height, setHeight] = useState<number | null>(null);
   // Phones are for looking: the plan gets the screen, the panel opens from its tabs.
@@ -107,6 +108,7 @@ function EditorBody() {
       data-testid="design-editor"
       data-readonly={meta.readOnly ? 'true' : 'false'}
       data-plan-ms={planMs === null ? '' : planMs.toFixed(1)}
+      data-planner={planVia ?? ''}
       className="-mx-3 -my-5 flex flex-col overflow-hidden bg-white sm:-mx-5 sm:-my-7"
       style={{ height: height ?? '70dvh' }}
     >

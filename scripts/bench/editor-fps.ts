@@ -123,6 +123,7 @@ export async function run(): Promise<EditorFpsResult | null> {
       .sort((a, b) => a - b);
     const seconds = (t[t.length - 1] - t[0]) / 1000;
     const planMs = await page.getByTestId('design-editor').getAttribute('data-plan-ms');
+    const via = await page.getByTestId('design-editor').getAttribute('data-planner');
     const result: EditorFpsResult = {
       fps: (t.length - 1) / seconds,
       frames: t.length,
@@ -135,7 +136,7 @@ export async function run(): Promise<EditorFpsResult | null> {
     console.log(
       `editor fps (drag a corner of a 30 m x 20 m L deck, ${steps} touch moves): ${result.fps.toFixed(1)} fps, ` +
         `p95 frame ${result.p95FrameMs.toFixed(1)} ms, ${result.longFrames} frames over 50 ms, ` +
-        `${result.planUpdates} frame plans during the drag (last recompute ${result.lastPlanMs ?? '?'} ms, in a Web Worker)`,
+        `${result.planUpdates} frame plans during the drag (last recompute ${result.lastPlanMs ?? '?'} ms, ${via === 'worker' ? 'in the Web Worker' : 'on the main thread'})`,
     );
     return result;
   } finally {

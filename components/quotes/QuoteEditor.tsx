@@ -16,6 +16,7 @@ import { formatDateTime } from '@/components/ui/formatDate';
 import { formatMoney, parseMoney, quoteTotals } from '@/lib/quote/totals';
 import type { QuoteView } from '@/lib/server/quotes';
 import type { QuoteLine } from '@/lib/validation/quote';
+import { QuoteRevisions } from './QuoteRevisions';
 import { QuoteStatusBadge } from './QuoteStatusBadge';
 
 type Draft = {
@@ -402,6 +403,8 @@ export function QuoteEditor({ jobId, quoteId }: { jobId: string; quoteId: string
           </div>
         ) : null}
       </Card>
+
+      <QuoteRevisions quoteId={quoteId} current={q.revision} />
 
       {!locked ? (
         <Card title="Send to the client">

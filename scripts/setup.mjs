@@ -7,6 +7,9 @@ import { fileURLToPath } from 'node:url';
 import { ensureDatabase } from './db.mjs';
 
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+// No telemetry from builds or servers: this machine reaches only the package registries.
+process.env.NEXT_TELEMETRY_DISABLED = '1';
+
 const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
 
 export function log(msg) {

@@ -285,9 +285,12 @@ export function insertPairs(
     for (const [b0, b1] of runs) {
       let lo = stops[b0];
       let hi = stops[b1 + 1];
-      // Where the run ends at a rim, follow the rim's slope over to the pair's position.
-      if (b0 === 0) lo += slopeShift(ctx, line.endEdge[0], x - line.x);
-      if (b1 === last) hi += slopeShift(ctx, line.endEdge[1], x - line.x);
+      // Where the run ends at a rim, the pair may reach as far as that rim's slope carries it over
+      // to the pair's position; the clip below stops it at the rim it really meets there. (Only
+      // lengthen: a rim nearly parallel to the joists, or a corner between the two, would pull the
+      // end far back along the slope, off the joints it is there for.)
+      if (b0 === 0) lo += Math.min(0, slopeShift(ctx, line.endEdge[0], x - line.x));
+      if (b1 === last) hi += Math.max(0, slopeShift(ctx, line.endEdge[1], x - line.x));
       const pair: JoistLine = {
         id: `L${++n}`,
         x,
@@ -316,8 +319,8 @@ export function insertPairs(
   made.forEach((p, i) => {
     let best: [number, number] | null = null;
     for (const [a, b] of inside[i]) {
-      const lo = Math.max(p.y0, a + trimAt(ctx, p.x, a));
-      const hi = Math.min(p.y1, b - trimAt(ctx, p.x, b));
+      const lo = Math.max(p.y0, a + trimAt(ctx, p.x, a, 1));
+      const hi = Math.min(p.y1, b - trimAt(ctx, p.x, b, -1));
       if (hi - lo > 1 && (!best || hi - lo > best[1] - best[0])) best = [lo, hi];
     }
     if (best) {

@@ -1,6 +1,6 @@
 // Places joist lines: field joists at the set centres, edge joists, border joists; clips them to the outline. Pure: engine only.
-import type { MemberRole, Ply } from '../types';
-import { distToSegment, subtractInterval } from '../geometry';
+import type { MemberRole, Ply, Pt } from '../types';
+import { crossVertical, distToSegment, insetRing, scanRing, subtractInterval } from '../geometry';
 import { verticalsInside } from '../clip';
 import type { EdgeInfo, FrameContext, JoistLine } from './model';
 
@@ -102,8 +102,8 @@ export function placeJoistLines(ctx: FrameContext): JoistLine[] {
         y0 = Math.max(y0, cd.range[0]);
         y1 = Math.min(y1, cd.range[1]);
       }
-      y0 += trimAt(ctx, cd.x, y0);
-      y1 -= trimAt(ctx, cd.x, y1);
+      y0 += trimAt(ctx, cd.x, y0, 1);
+      y1 -= trimAt(ctx, cd.x, y1, -1);
       if (y1 - y0 >= MIN_LINE_MM) trimmed.push([y0, y1]);
     }
     let pieces = trimmed;
@@ -156,8 +156,62 @@ function isReflex(ctx: FrameContext, i: number): boolean {
   return (q[0] - p[0]) * (r[1] - q[1]) - (q[1] - p[1]) * (r[0] - q[0]) < 0;
 }
 
-/** How far a line end at (x, y) on the outline must move inward to stop at the rim's inner face. */
-export function trimAt(ctx: FrameContext, x: number, y: number): number {
+/** Each rim band of an edge that crosses the joists, as a mitred quad transposed (y, x) for vertical scans. */
+const bandCache = new WeakMap<FrameContext, { index: number; quad: Pt[] }[]>();
+
+function rimQuads(ctx: FrameContext): { index: number; quad: Pt[] }[] {
+  let quads = bandCache.get(ctx);
+  if (quads) return quads;
+  const inner = insetRing(ctx.ring, ctx.w);
+  const n = ctx.ring.length;
+  quads = [];
+  for (const e of ctx.edges) {
+    if (e.kind === 'parallel') continue;
+    const j = (e.index + 1) % n;
+    // Outer face on the edge, inner face a joist width inside; the ends are the mitre lines.
+    const quad: Pt[] = [ctx.ring[e.index], ctx.ring[j], inner[j], inner[e.index]];
+    quads.push({ index: e.index, quad: quad.map((p) => [p[1], p[0]] as Pt) });
+  }
+  bandCache.set(ctx, quads);
+  return quads;
+}
+
+/**
+ * How far a line end at (x, y) on the outline must move inward (dir +1: up from a lower end, -1:
+ * down from an upper end) to stop at the inner face of the rims it runs into. The rims meet mitred,
+ * so near a corner the line passes from one rim's band into its neighbour's and stops at the
+ * neighbour's inner face; along an edge nearly parallel to the joists it runs inside the rim for a
+ * long way. Falls back to the straight depth across the nearest rim when no band holds the end.
+ */
+export function trimAt(ctx: FrameContext, x: number, y: number, dir: 1 | -1): number {
+  const quads = rimQuads(ctx);
+  const tol = 1e-3;
+  // Start from the exact crossing with the outline: the clipped end is rounded to 0.1 mm in x,
+  // which moves it along an edge nearly parallel to the joists by much more than that in y.
+  let t = y;
+  let near = Infinity;
+  const n = ctx.ring.length;
+  for (let i = 0; i < n; i++) {
+    const c = crossVertical(ctx.ring[i], ctx.ring[(i + 1) % n], x);
+    if (c !== null && Math.abs(c - y) < near) {
+      near = Math.abs(c - y);
+      t = c;
+    }
+  }
+  let found = false;
+  for (let guard = 0; guard <= quads.length; guard++) {
+    let next = t;
+    for (const q of quads) {
+      for (const [lo, hi] of scanRing(q.quad, x)) {
+        if (dir > 0 && lo <= t + tol && hi > next) next = hi;
+        if (dir < 0 && hi >= t - tol && lo < next) next = lo;
+      }
+    }
+    if (Math.abs(next - t) <= tol) break;
+    found = true;
+    t = next;
+  }
+  if (found) return Math.max(0, (t - y) * dir);
   const e = endEdgeAt(ctx, x, y);
   if (!e) return ctx.w;
   // Perpendicular depth w along a vertical line is w / |cos| of the edge's angle to the boards.

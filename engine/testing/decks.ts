@@ -207,3 +207,21 @@ export function propertyRuns(fallback = 150): number {
   const env = Number(globalThis.process?.env?.JW_PROPERTY_RUNS);
   return Number.isFinite(env) && env > 0 ? env : fallback;
 }
+
+/** The seed CI uses when JW_PROPERTY_SEED is unset: every run checks the same cases. */
+export const DEFAULT_PROPERTY_SEED = 20261201;
+
+/**
+ * The fast-check seed for the property tests: JW_PROPERTY_SEED as a number, a fresh random seed for
+ * "random" (fast-check prints the seed and path of any failure), or DEFAULT_PROPERTY_SEED.
+ */
+export function propertySeed(): number {
+  const raw = globalThis.process?.env?.JW_PROPERTY_SEED?.trim();
+  if (!raw) return DEFAULT_PROPERTY_SEED;
+  if (raw === 'random') return (Math.random() * 2 ** 32) | 0;
+  const n = Number(raw);
+  if (!Number.isInteger(n)) {
+    throw new Error(`JW_PROPERTY_SEED must be an integer or "random", not ${JSON.stringify(raw)}`);
+  }
+  return n | 0;
+}

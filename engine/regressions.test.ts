@@ -21,6 +21,10 @@ const CASES: Record<string, { broke: string; why: string }> = {
     broke: 'buttJoints',
     why: 'a pair joist followed a steep rim slope 1100 mm back past a corner and no longer reached the two butt joints it was for',
   },
+  'regression-sliver-rim-off-deck': {
+    broke: 'insideOutline',
+    why: 'a triangle 25 mm thick at one corner: the mitred rim centreline folded past the opposite edge and was still framed, off the deck',
+  },
 };
 
 const INVARIANTS = [

@@ -24,6 +24,11 @@ export interface EdgeInfo {
   /** Rim centreline, half a joist width inside the edge (mitred at the corners). */
   rimA: Pt;
   rimB: Pt;
+  /**
+   * Whether the rim centreline stays on the deck: false where the deck is thinner than a joist
+   * and the inset folded over (its ends or middle fall outside the outline).
+   */
+  rimInside: boolean;
 }
 
 /** A vertical joist line segment (one inside interval of one line). */

@@ -1,7 +1,15 @@
 // Prepares the outline for layout: cleans it, rotates it so boards run along +x, classifies its edges. Pure: engine only.
 import type { DesignDocument } from '../schema';
 import type { Pt } from '../types';
-import { boundsOf, insetRing, normaliseRing, simplePolygonProblem } from '../geometry';
+import {
+  boundsOf,
+  distToRing,
+  insetRing,
+  normaliseRing,
+  pointInRing,
+  segmentsIntersect,
+  simplePolygonProblem,
+} from '../geometry';
 import type { EdgeInfo, EdgeKind, FrameContext } from './model';
 
 /** An edge within this fraction of the joist direction counts as running with the joists. */
@@ -37,7 +45,13 @@ export function frameContext(design: DesignDocument, worldRing: Pt[]): FrameCont
     if (Math.abs(ux) < PARALLEL_TOL) kind = 'parallel';
     else if (Math.abs(uy) <= ROW_EDGE_SIN) kind = 'row';
     else kind = 'angled';
-    edges.push({ index: i, a, b, length, ux, uy, kind, rimA: rim[i], rimB: rim[(i + 1) % n] });
+    const rimA = rim[i];
+    const rimB = rim[(i + 1) % n];
+    const mid: Pt = [(rimA[0] + rimB[0]) / 2, (rimA[1] + rimB[1]) / 2];
+    const rimInside =
+      [rimA, rimB, mid].every((p) => onDeck(ring, p)) &&
+      ring.every((p, k) => !segmentsIntersect(rimA, rimB, p, ring[(k + 1) % n]));
+    edges.push({ index: i, a, b, length, ux, uy, kind, rimA, rimB, rimInside });
   }
   return {
     design,
@@ -50,4 +64,9 @@ export function frameContext(design: DesignDocument, worldRing: Pt[]): FrameCont
     rowLimit: Math.min(design.joist.maxSpanMm, design.joist.stockMm),
     usePosts: design.heightMm >= design.postsFromHeightMm,
   };
+}
+
+/** Inside the outline, or on its edge within rounding (0.5 mm). */
+function onDeck(ring: Pt[], p: Pt): boolean {
+  return pointInRing(p, ring) || distToRing(p, ring) <= 0.5;
 }

@@ -18,11 +18,11 @@ function toFrame(ctx: FrameContext, p: Pt): Pt {
   return [p[0] * ctx.cos + p[1] * ctx.sin, -p[0] * ctx.sin + p[1] * ctx.cos];
 }
 
-/** True when the rim of this edge is usable (the mitred centreline did not fold over). */
+/** True when the rim of this edge is usable (the mitred centreline did not fold over or off the deck). */
 export function rimUsable(e: EdgeInfo): boolean {
   const dx = e.rimB[0] - e.rimA[0];
   const dy = e.rimB[1] - e.rimA[1];
-  return dx * e.ux + dy * e.uy > 1;
+  return dx * e.ux + dy * e.uy > 1 && e.rimInside;
 }
 
 /** Rows under the rims of edges that run with the boards: the rows "at both ends" of the joists. */

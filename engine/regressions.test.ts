@@ -25,6 +25,14 @@ const CASES: Record<string, { broke: string; why: string }> = {
     broke: 'insideOutline',
     why: 'a triangle 25 mm thick at one corner: the mitred rim centreline folded past the opposite edge and was still framed, off the deck',
   },
+  'regression-last-course-on-rim-face': {
+    broke: 'boardGaps',
+    why: 'the last, narrow course is centred exactly on the rim face and the joist ends; the check once read that edge by float noise (a test fix, the plan was sound)',
+  },
+  'regression-pair-across-notch': {
+    broke: 'buttJoints',
+    why: 'a pair joist beside a reflex corner of an L kept only the longest inside piece, in the other arm, away from its three joints',
+  },
 };
 
 const INVARIANTS = [

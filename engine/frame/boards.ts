@@ -251,7 +251,10 @@ export function insertPairs(
   lines: JoistLine[],
 ): JoistLine[] {
   const w = ctx.w;
-  const wanted = new Map<string, { line: JoistLine; side: number; bays: Set<number> }>();
+  const wanted = new Map<
+    string,
+    { line: JoistLine; side: number; bays: Set<number>; at: { bay: number; y: number }[] }
+  >();
   for (const j of joints) {
     const line = j.line;
     if (!line || j.side === 0) continue;
@@ -262,15 +265,18 @@ export function insertPairs(
     const key = `${line.id}|${j.side}`;
     let entry = wanted.get(key);
     if (!entry) {
-      entry = { line, side: j.side, bays: new Set() };
+      entry = { line, side: j.side, bays: new Set(), at: [] };
       wanted.set(key, entry);
     }
     entry.bays.add(bay);
+    entry.at.push({ bay, y });
   }
   const made: JoistLine[] = [];
+  /** The joint positions each pair is there for, and the key of its joist and side. */
+  const madeFor: { key: string; ys: number[] }[] = [];
   const byKey = new Map<string, JoistLine[]>();
   let n = lines.length;
-  for (const [key, { line, side, bays }] of wanted) {
+  for (const [key, { line, side, bays, at }] of wanted) {
     const stops = [line.y0, ...line.supports, line.y1];
     const last = stops.length - 2;
     const sorted = [...bays].sort((a, b) => a - b);
@@ -307,6 +313,7 @@ export function insertPairs(
       };
       out.push(pair);
       made.push(pair);
+      madeFor.push({ key, ys: at.filter((j) => j.bay >= b0 && j.bay <= b1).map((j) => j.y) });
     }
     byKey.set(key, out);
   }
@@ -316,21 +323,31 @@ export function insertPairs(
     ctx.ring,
     made.map((p) => p.x),
   );
+  // Where the pair's line leaves the deck and comes back (past a notch), keep each inside piece
+  // that carries one of its joints: the longest piece may be in another arm of the deck.
+  const extra: JoistLine[] = [];
   made.forEach((p, i) => {
-    let best: [number, number] | null = null;
+    const keep: [number, number][] = [];
     for (const [a, b] of inside[i]) {
       const lo = Math.max(p.y0, a + trimAt(ctx, p.x, a, 1));
       const hi = Math.min(p.y1, b - trimAt(ctx, p.x, b, -1));
-      if (hi - lo > 1 && (!best || hi - lo > best[1] - best[0])) best = [lo, hi];
+      if (hi - lo > 1 && madeFor[i].ys.some((y) => lo - half <= y && y <= hi + half)) {
+        keep.push([lo, hi]);
+      }
     }
-    if (best) {
-      p.y0 = best[0];
-      p.y1 = best[1];
-    } else {
+    if (keep.length === 0) {
       p.y1 = p.y0; // nothing left: dropped below
+      return;
     }
+    [p.y0, p.y1] = keep[0];
     p.bearY = [p.y0, p.y1];
+    for (const [lo, hi] of keep.slice(1)) {
+      const more: JoistLine = { ...p, id: `L${++n}`, y0: lo, y1: hi, bearY: [lo, hi] };
+      extra.push(more);
+      byKey.get(madeFor[i].key)!.push(more);
+    }
   });
+  made.push(...extra);
   for (let i = made.length - 1; i >= 0; i--) if (made[i].y1 - made[i].y0 <= 1) made.splice(i, 1);
   for (const list of byKey.values()) {
     for (let i = list.length - 1; i >= 0; i--) if (list[i].y1 - list[i].y0 <= 1) list.splice(i, 1);

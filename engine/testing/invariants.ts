@@ -13,6 +13,9 @@ function framer(design: DesignDocument) {
   return (p: Pt): Pt => [p[0] * c + p[1] * s, -p[0] * s + p[1] * c];
 }
 
+/** Float noise allowance (mm) for a footprint edge lying on a board's centreline. */
+const EDGE = 1e-6;
+
 const isFrame = (m: Member) => m.step === undefined;
 const isJoistLike = (m: Member) => (m.kind === 'joist' || m.kind === 'rim') && isFrame(m);
 
@@ -92,7 +95,12 @@ export function boardGaps(design: DesignDocument, plan: FramePlanCore): void {
     const lo = Math.min(a[0], b[0]);
     const hi = Math.max(a[0], b[0]);
     const feet: [number, number][] = [];
-    for (const s of supports) feet.push(...footprintAt(s.a, s.b, w, y));
+    // A footprint is a closed band: one whose edge lies on the board's centreline carries it.
+    // A single scan at y is half-open, so a joist end or rim face exactly at y would count or not
+    // by float noise in the rotation (about 1e-12 mm): scan just either side and take both.
+    for (const s of supports) {
+      feet.push(...footprintAt(s.a, s.b, w, y - EDGE), ...footprintAt(s.a, s.b, w, y + EDGE));
+    }
     feet.sort((p, q) => p[0] - q[0]);
     let reach = -Infinity;
     for (const [fa, fb] of feet) {

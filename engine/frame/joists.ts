@@ -1,6 +1,6 @@
 // Places joist lines: field joists at the set centres, edge joists, border joists; clips them to the outline. Pure: engine only.
 import type { MemberRole, Ply, Pt } from '../types';
-import { crossVertical, distToSegment, insetRing, scanRing, subtractInterval } from '../geometry';
+import { EPS, crossVertical, distToSegment, insetRing, subtractInterval } from '../geometry';
 import { verticalsInside } from '../clip';
 import type { EdgeInfo, FrameContext, JoistLine } from './model';
 
@@ -157,9 +157,17 @@ function isReflex(ctx: FrameContext, i: number): boolean {
 }
 
 /** Each rim band of an edge that crosses the joists, as a mitred quad transposed (y, x) for vertical scans. */
-const bandCache = new WeakMap<FrameContext, { index: number; quad: Pt[] }[]>();
+interface RimQuad {
+  index: number;
+  quad: Pt[];
+  /** The quad's range across the joists (layout x), to skip it quickly. */
+  lo: number;
+  hi: number;
+}
 
-function rimQuads(ctx: FrameContext): { index: number; quad: Pt[] }[] {
+const bandCache = new WeakMap<FrameContext, RimQuad[]>();
+
+function rimQuads(ctx: FrameContext): RimQuad[] {
   let quads = bandCache.get(ctx);
   if (quads) return quads;
   const inner = insetRing(ctx.ring, ctx.w);
@@ -170,10 +178,44 @@ function rimQuads(ctx: FrameContext): { index: number; quad: Pt[] }[] {
     const j = (e.index + 1) % n;
     // Outer face on the edge, inner face a joist width inside; the ends are the mitre lines.
     const quad: Pt[] = [ctx.ring[e.index], ctx.ring[j], inner[j], inner[e.index]];
-    quads.push({ index: e.index, quad: quad.map((p) => [p[1], p[0]] as Pt) });
+    const xs = quad.map((p) => p[0]);
+    quads.push({
+      index: e.index,
+      quad: quad.map((p) => [p[1], p[0]] as Pt),
+      lo: Math.min(...xs),
+      hi: Math.max(...xs),
+    });
   }
   bandCache.set(ctx, quads);
   return quads;
+}
+
+/** Scratch for quadCrossings: the sorted crossings of one quad (at most four). */
+const CROSS = [0, 0, 0, 0];
+
+/**
+ * The crossings of the line x (a transposed quad's y) with the quad's sides, sorted into CROSS;
+ * returns how many (consecutive pairs are the inside intervals, even-odd, as scanRing gives them).
+ * Allocation-free: this runs for every line end.
+ */
+function quadCrossings(quad: Pt[], x: number): number {
+  let k = 0;
+  for (let i = 0, j = 3; i < 4; j = i++) {
+    const qi = quad[i];
+    const qj = quad[j];
+    // Transposed: [1] is across the joists, [0] along them.
+    if (qi[1] > x !== qj[1] > x) {
+      const v = qi[0] + ((x - qi[1]) * (qj[0] - qi[0])) / (qj[1] - qi[1]);
+      // Insertion into the sorted scratch.
+      let m = k++;
+      while (m > 0 && CROSS[m - 1] > v) {
+        CROSS[m] = CROSS[m - 1];
+        m--;
+      }
+      CROSS[m] = v;
+    }
+  }
+  return k;
 }
 
 /**
@@ -202,7 +244,12 @@ export function trimAt(ctx: FrameContext, x: number, y: number, dir: 1 | -1): nu
   for (let guard = 0; guard <= quads.length; guard++) {
     let next = t;
     for (const q of quads) {
-      for (const [lo, hi] of scanRing(q.quad, x)) {
+      if (x <= q.lo || x >= q.hi) continue;
+      const k = quadCrossings(q.quad, x);
+      for (let c = 0; c + 1 < k; c += 2) {
+        const lo = CROSS[c];
+        const hi = CROSS[c + 1];
+        if (hi - lo <= EPS) continue;
         if (dir > 0 && lo <= t + tol && hi > next) next = hi;
         if (dir < 0 && hi >= t - tol && lo < next) next = lo;
       }

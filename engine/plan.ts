@@ -326,8 +326,8 @@ export function layoutFrame(design: DesignDocument): FramePlanCore {
           valueMm: round1(c),
           limitMm: maxCant,
           message: `Joist overhangs its last support by ${round1(c)} mm: at most ${maxCant} mm`,
-          source: PRACTICE,
-          explain: `Cantilever = distance from the last support to the joist end = ${round1(c)} mm; the joist allows ${maxCant} mm (${PRACTICE}, from the joist settings).`,
+          source: limitSource(design.joist).source,
+          explain: `Cantilever = distance from the last support to the joist end = ${round1(c)} mm; the joist allows ${maxCant} mm (${limitSource(design.joist).source}, from the joist settings).${limitSource(design.joist).note}`,
         });
       }
     }
@@ -349,8 +349,8 @@ export function layoutFrame(design: DesignDocument): FramePlanCore {
       valueMm: round1(s.span),
       limitMm: boardLimit,
       message: `Boards span ${round1(s.span)} mm between joists here: at most ${boardLimit} mm`,
-      source: PRACTICE,
-      explain: `Span measured along the board (clear gap + one joist width), so where a support crosses at an angle it is centres / sin(angle between board and joist). Limit ${boardLimit} mm from the board settings (${PRACTICE}).`,
+      source: limitSource(design.board).source,
+      explain: `Span measured along the board (clear gap + one joist width), so where a support crosses at an angle it is centres / sin(angle between board and joist). Limit ${boardLimit} mm from the board settings (${limitSource(design.board).source}).${limitSource(design.board).note}`,
     });
   }
 
@@ -403,6 +403,17 @@ export function layoutFrame(design: DesignDocument): FramePlanCore {
   };
 }
 
+/** Where a member's limit comes from: the chosen product's source when there is one. */
+function limitSource(spec: { source?: string; limitExplain?: string }): {
+  source: string;
+  note: string;
+} {
+  return {
+    source: spec.source ?? PRACTICE,
+    note: spec.limitExplain ? ` ${spec.limitExplain}` : '',
+  };
+}
+
 /** The id of the stock piece of a line that covers y. */
 function pieceAt(l: JoistLine | null, y: number): string | undefined {
   if (!l) return undefined;
@@ -427,8 +438,8 @@ function spanFlag(
     valueMm: round1(span),
     limitMm: limit,
     message: `Joist spans ${round1(span)} mm ${where}: at most ${limit} mm`,
-    source: PRACTICE,
-    explain: `Span = distance between supports along the joist = ${round1(span)} mm; the joist allows ${limit} mm (${PRACTICE}: a 125 x 50 mm plastic joist spans at most 1.5 m; here from the joist settings). Add a support row.`,
+    source: limitSource(ctx.design.joist).source,
+    explain: `Span = distance between supports along the joist = ${round1(span)} mm; the joist allows ${limit} mm (${limitSource(ctx.design.joist).source}; ${PRACTICE} for a 125 x 50 mm plastic joist is at most 1.5 m; here from the joist settings). Add a support row.${limitSource(ctx.design.joist).note}`,
   };
 }
 

@@ -19,17 +19,5 @@ export const JOB_STATUSES = [
 ] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
-export const PRODUCT_KINDS = [
-  'joist',
-  'beam',
-  'board',
-  'post',
-  'block',
-  'clip',
-  'screw',
-  'membrane',
-  'fascia',
-  'concrete',
-  'other',
-] as const;
-export type ProductKind = (typeof PRODUCT_KINDS)[number];
+// One list of product kinds, owned by the engine's catalogue schema (the table's CHECK mirrors it).
+export { PRODUCT_KINDS, type ProductKind } from '@/engine/products/schema';

@@ -1,7 +1,7 @@
 // Catalogue product schema (zod), shared by the engine, the product API and the catalogue form. Touches nothing but zod.
 import { z } from 'zod';
 
-/** Kinds of catalogue product (mirrors models/constants PRODUCT_KINDS and the table's CHECK). */
+/** Kinds of catalogue product (models/ re-exports this list; the products table's CHECK mirrors it). */
 export const PRODUCT_KINDS = [
   'joist',
   'beam',

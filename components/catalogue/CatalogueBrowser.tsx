@@ -2,14 +2,14 @@
 // The catalogue page body: search, kind and in-use filters, the product table, and the owner's form.
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
-import { Alert } from '@/components/ui/Alert';
+import { LoadError } from '@/components/ui/LoadError';
 import { Button } from '@/components/ui/Button';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { SafetyNotice } from '@/components/ui/SafetyNotice';
 import { SearchInput } from '@/components/ui/SearchInput';
 import { Select } from '@/components/ui/Select';
 import { Spinner } from '@/components/ui/Spinner';
-import { errorMessage, fetchJson } from '@/components/ui/fetchJson';
+import { fetchJson } from '@/components/ui/fetchJson';
 import type { UnitSystem } from '@/lib/units';
 import { PRODUCT_KINDS, type ProductDto, type ProductKind } from '@/lib/validation/product';
 import { ProductEditor } from './ProductEditor';
@@ -94,17 +94,11 @@ export function CatalogueBrowser({ units, canEdit }: { units: UnitSystem; canEdi
       </div>
 
       {products.isError ? (
-        <Alert
-          tone="error"
+        <LoadError
           title="The catalogue could not be loaded"
-          action={
-            <Button variant="secondary" size="sm" onClick={() => void products.refetch()}>
-              Try again
-            </Button>
-          }
-        >
-          {errorMessage(products.error)}
-        </Alert>
+          error={products.error}
+          onRetry={() => void products.refetch()}
+        />
       ) : null}
 
       {products.isLoading ? (

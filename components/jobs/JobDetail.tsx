@@ -4,14 +4,14 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { BackLink } from '@/components/layout/BackLink';
 import { PageHeader } from '@/components/layout/PageHeader';
-import { Alert } from '@/components/ui/Alert';
+import { LoadError } from '@/components/ui/LoadError';
 import { Button } from '@/components/ui/Button';
 import { ButtonLink } from '@/components/ui/ButtonLink';
 import { Card } from '@/components/ui/Card';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { SafetyNotice } from '@/components/ui/SafetyNotice';
 import { Spinner } from '@/components/ui/Spinner';
-import { ApiError, errorMessage, fetchJson } from '@/components/ui/fetchJson';
+import { ApiError, fetchJson } from '@/components/ui/fetchJson';
 import { formatDateTime, formatRelative } from '@/components/ui/formatDate';
 import type { UnitSystem } from '@/lib/units';
 import { DeleteJobButton } from './DeleteJobButton';
@@ -59,17 +59,11 @@ export function JobDetail({
             It may have been deleted, or the link is wrong.
           </EmptyState>
         ) : (
-          <Alert
-            tone="error"
+          <LoadError
             title="The job could not be loaded"
-            action={
-              <Button variant="secondary" size="sm" onClick={() => void job.refetch()}>
-                Try again
-              </Button>
-            }
-          >
-            {errorMessage(job.error)}
-          </Alert>
+            error={job.error}
+            onRetry={() => void job.refetch()}
+          />
         )}
       </div>
     );

@@ -3,7 +3,7 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useCallback, useEffect, useMemo, useState } from 'react';
-import { Alert } from '@/components/ui/Alert';
+import { LoadError } from '@/components/ui/LoadError';
 import { Button } from '@/components/ui/Button';
 import { ButtonLink } from '@/components/ui/ButtonLink';
 import { EmptyState } from '@/components/ui/EmptyState';
@@ -11,7 +11,7 @@ import { Pagination } from '@/components/ui/Pagination';
 import { SearchInput } from '@/components/ui/SearchInput';
 import { Select } from '@/components/ui/Select';
 import { Spinner } from '@/components/ui/Spinner';
-import { errorMessage, fetchJson } from '@/components/ui/fetchJson';
+import { fetchJson } from '@/components/ui/fetchJson';
 import { JobCards } from './JobCards';
 import { JobsTable } from './JobsTable';
 import { StatusFilter } from './StatusFilter';
@@ -117,17 +117,11 @@ export function JobsBrowser({ canCreate }: { canCreate: boolean }) {
       </div>
 
       {jobs.isError ? (
-        <Alert
-          tone="error"
+        <LoadError
           title="The jobs could not be loaded"
-          action={
-            <Button variant="secondary" size="sm" onClick={() => void jobs.refetch()}>
-              Try again
-            </Button>
-          }
-        >
-          {errorMessage(jobs.error)}
-        </Alert>
+          error={jobs.error}
+          onRetry={() => void jobs.refetch()}
+        />
       ) : null}
 
       {jobs.isLoading ? (

@@ -1,11 +1,10 @@
 'use client';
 // Settings: the firm and its team (from GET /api/firm) beside the signed-in person's own choices.
 import { useQuery } from '@tanstack/react-query';
-import { Alert } from '@/components/ui/Alert';
-import { Button } from '@/components/ui/Button';
+import { LoadError } from '@/components/ui/LoadError';
 import { Card } from '@/components/ui/Card';
 import { Spinner } from '@/components/ui/Spinner';
-import { errorMessage, fetchJson } from '@/components/ui/fetchJson';
+import { fetchJson } from '@/components/ui/fetchJson';
 import { roleLabels, type ShellUser } from '@/components/layout/roles';
 import type { FirmDto } from '@/lib/validation/firm';
 import { FirmCard } from './FirmCard';
@@ -32,17 +31,11 @@ export function SettingsView({ user }: { user: ShellUser }) {
             <Spinner /> Loading the firm…
           </div>
         ) : firm.isError || !firm.data ? (
-          <Alert
-            tone="error"
+          <LoadError
             title="The firm could not be loaded"
-            action={
-              <Button variant="secondary" size="sm" onClick={() => void firm.refetch()}>
-                Try again
-              </Button>
-            }
-          >
-            {errorMessage(firm.error)}
-          </Alert>
+            error={firm.error}
+            onRetry={() => void firm.refetch()}
+          />
         ) : (
           <>
             <FirmCard firm={firm.data.firm} />
